@@ -1,0 +1,37 @@
+import { Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { AuthModule } from './auth/auth.module.js';
+import { JwtAuthGuard } from './auth/guards/jwt-auth.guard.js';
+import { RolesGuard } from './auth/guards/roles.guard.js';
+import { AppThrottlerGuard } from './auth/guards/throttler.guard.js';
+import { ConfigModule } from './config/config.module.js';
+import { Env } from './config/env.js';
+import { DatabaseModule } from './database/database.module.js';
+import { HealthController } from './health/health.controller.js';
+import { StudioModule } from './studio/studio.module.js';
+import { UsersModule } from './users/users.module.js';
+
+@Module({
+  imports: [
+    ConfigModule,
+    DatabaseModule,
+    ThrottlerModule.forRootAsync({
+      inject: [Env],
+      useFactory: (env: Env) => ({
+        throttlers: [{ name: 'default', ttl: 60_000, limit: env.THROTTLE_LIMIT }],
+      }),
+    }),
+    AuthModule,
+    UsersModule,
+    StudioModule,
+  ],
+  controllers: [HealthController],
+  providers: [
+    // Order matters: throttle first, then authenticate, then authorise.
+    { provide: APP_GUARD, useClass: AppThrottlerGuard },
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+  ],
+})
+export class AppModule {}

@@ -1,0 +1,45 @@
+import { describe, expect, it } from 'vitest';
+import { corsOrigins, DEV_JWT_SECRET, EnvError, validateEnv } from './env.js';
+
+describe('validateEnv', () => {
+  it('runs the local demo on defaults', () => {
+    const env = validateEnv({});
+    expect(env).toMatchObject({
+      PORT: 3000,
+      DATABASE_PATH: 'data/nappe.sqlite',
+      JWT_ACCESS_TTL_SECONDS: 900,
+    });
+    expect(corsOrigins(env)).toEqual(['http://localhost:5173', 'http://localhost:5174']);
+  });
+
+  it('lists every bad value at once, naming the variable', () => {
+    try {
+      validateEnv({ PORT: 'eighty', JWT_ACCESS_TTL_SECONDS: '3600', NODE_ENV: 'staging' });
+      expect.unreachable();
+    } catch (error) {
+      expect(error).toBeInstanceOf(EnvError);
+      const { problems } = error as EnvError;
+      expect(problems.join('\n')).toMatch(/PORT/);
+      expect(problems.join('\n')).toMatch(/JWT_ACCESS_TTL_SECONDS must be at most 900/);
+      expect(problems.join('\n')).toMatch(/NODE_ENV/);
+    }
+  });
+
+  it('refuses the development secret, a short secret and insecure cookies in production', () => {
+    expect(() => validateEnv({ NODE_ENV: 'production', JWT_SECRET: DEV_JWT_SECRET })).toThrow(
+      /development default is refused/,
+    );
+    expect(() => validateEnv({ NODE_ENV: 'production', JWT_SECRET: 'short' })).toThrow(
+      /at least 32/,
+    );
+    expect(() =>
+      validateEnv({ NODE_ENV: 'production', JWT_SECRET: 'k'.repeat(40), COOKIE_SECURE: 'false' }),
+    ).toThrow(/COOKIE_SECURE/);
+  });
+
+  it('never lets "null" into the CORS allow-list', () => {
+    expect(corsOrigins(validateEnv({ CORS_ORIGINS: 'null, http://localhost:5173' }))).toEqual([
+      'http://localhost:5173',
+    ]);
+  });
+});

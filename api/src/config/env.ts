@@ -1,0 +1,128 @@
+import { plainToInstance, Transform } from 'class-transformer';
+import {
+  IsBoolean,
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  Max,
+  Min,
+  MinLength,
+  validateSync,
+} from 'class-validator';
+
+/** The development-only signing secret. Production refuses to boot with it. */
+export const DEV_JWT_SECRET = 'nappe-local-development-secret-change-me-in-production';
+
+const toInt = ({ value }: { value: unknown }): unknown =>
+  typeof value === 'string' && value.trim() !== '' ? Number(value) : value;
+const toBool = ({ value }: { value: unknown }): unknown =>
+  value === 'true' || value === '1' ? true : value === 'false' || value === '0' ? false : value;
+
+/**
+ * Every setting the API reads from its environment, with defaults that run the local demo.
+ * Validated once at boot: a bad value stops the process with a message naming the variable.
+ */
+export class Env {
+  @IsIn(['development', 'test', 'production'])
+  NODE_ENV: 'development' | 'test' | 'production' = 'development';
+
+  @Transform(toInt)
+  @IsInt()
+  @Min(0)
+  @Max(65535)
+  PORT = 3000;
+
+  @IsString()
+  HOST = '127.0.0.1';
+
+  /** SQLite file; relative paths are taken from the working directory. `:memory:` for tests. */
+  @IsString()
+  @MinLength(1)
+  DATABASE_PATH = 'data/nappe.sqlite';
+
+  @IsString()
+  @MinLength(32, { message: 'JWT_SECRET must be at least 32 characters' })
+  JWT_SECRET = DEV_JWT_SECRET;
+
+  /** Access-token lifetime. Capped at 15 minutes (OWASP ASVS 5.0 V9/V7 session guidance). */
+  @Transform(toInt)
+  @IsInt()
+  @Min(30)
+  @Max(900, { message: 'JWT_ACCESS_TTL_SECONDS must be at most 900 (15 minutes)' })
+  JWT_ACCESS_TTL_SECONDS = 900;
+
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  @Max(90)
+  REFRESH_TTL_DAYS = 14;
+
+  /** Comma-separated list of origins allowed by CORS and by the refresh endpoint's Origin check. */
+  @IsString()
+  CORS_ORIGINS = 'http://localhost:5173,http://localhost:5174';
+
+  @Transform(toBool)
+  @IsBoolean()
+  COOKIE_SECURE = true;
+
+  @IsIn(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
+  LOG_LEVEL = 'info';
+
+  /** Requests per minute per client on ordinary routes. Raise it for load tests. */
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  THROTTLE_LIMIT = 600;
+
+  /** Sign-in / sign-up / refresh attempts per minute per address and account. */
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  AUTH_THROTTLE_LIMIT = 10;
+
+  /** Argon2id memory cost in KiB; OWASP's minimum is 19 MiB (19456 KiB), t=2, p=1. */
+  @Transform(toInt)
+  @IsInt()
+  @Min(19456)
+  ARGON2_MEMORY_KIB = 19456;
+
+  @IsOptional()
+  @IsString()
+  PUBLIC_STOREFRONT_URL = 'http://localhost:5173';
+
+  @IsOptional()
+  @IsString()
+  PUBLIC_ADMIN_URL = 'http://localhost:5174';
+}
+
+export class EnvError extends Error {
+  constructor(public readonly problems: string[]) {
+    super(`Invalid configuration:\n  - ${problems.join('\n  - ')}`);
+    this.name = 'EnvError';
+  }
+}
+
+/** Parses and checks the environment. Throws EnvError listing every problem at once. */
+export function validateEnv(raw: Record<string, unknown>): Env {
+  const env = plainToInstance(Env, raw, { exposeDefaultValues: true });
+  const problems = validateSync(env, { skipMissingProperties: false }).flatMap((error) =>
+    Object.values(error.constraints ?? {}).map((m) => `${error.property}: ${m}`),
+  );
+  if (env.NODE_ENV === 'production') {
+    if (env.JWT_SECRET === DEV_JWT_SECRET) {
+      problems.push(
+        'JWT_SECRET: set a secret of your own in production (the development default is refused)',
+      );
+    }
+    if (!env.COOKIE_SECURE) problems.push('COOKIE_SECURE: must be true in production');
+  }
+  if (problems.length > 0) throw new EnvError(problems);
+  return env;
+}
+
+export function corsOrigins(env: Env): string[] {
+  return env.CORS_ORIGINS.split(',')
+    .map((o) => o.trim())
+    .filter((o) => o !== '' && o !== 'null');
+}

@@ -1,0 +1,4 @@
+import { InitialSchema1764633600000 } from './1764633600000-initial-schema.js';
+
+/** Every migration, in order. Listed as classes (a glob does not work with ESM builds). */
+export const migrations = [InitialSchema1764633600000];

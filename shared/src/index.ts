@@ -1,0 +1,2 @@
+export * from './auth/roles.js';
+export * from './auth/credentials.js';
