@@ -1,0 +1,9 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    include: ['payment-fake/**/*.test.mjs'],
+    environment: 'node',
+    testTimeout: 20_000,
+  },
+});
