@@ -25,3 +25,8 @@ export * from './quote/quote.js';
 export * from './orders/booking-errors.js';
 export * from './orders/order-status.js';
 export * from './orders/order-schemas.js';
+export * from './prep-schedule/zoned-time.js';
+export * from './prep-schedule/working-calendar.js';
+export * from './prep-schedule/prep-schedule.js';
+export * from './prep-plan/prep-order.js';
+export * from './prep-plan/prep-plan.js';
