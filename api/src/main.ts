@@ -1,5 +1,4 @@
 import 'reflect-metadata';
-import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { AppModule } from './app.module.js';
@@ -24,9 +23,8 @@ async function bootstrap(): Promise<void> {
   });
   configureApp(app, env);
   await app.listen(env.PORT, env.HOST);
-  new Logger('Nappe').log(
-    `API listening on http://${env.HOST === '0.0.0.0' ? 'localhost' : env.HOST}:${env.PORT}/api`,
-  );
+  if (env.LOG_LEVEL !== 'silent')
+    console.log(`API listening on http://${env.HOST}:${env.PORT}/api`);
 }
 
 bootstrap().catch((error: unknown) => {

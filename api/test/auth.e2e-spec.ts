@@ -233,6 +233,44 @@ describe('POST /api/auth/refresh', () => {
   });
 });
 
+describe('separate sessions for the two apps', () => {
+  const ADMIN_ORIGIN = 'http://localhost:5174';
+
+  it('gives the admin app its own refresh cookie, so a storefront sign-in never replaces it', async () => {
+    const chef = await makeUser(t, { role: Role.Chef });
+    const client = await makeUser(t);
+    const admin = await t.http
+      .post('/api/auth/login')
+      .set('Origin', ADMIN_ORIGIN)
+      .send({ email: chef.user.email, password: chef.password })
+      .expect(200);
+    const adminCookie = cookiesOf(admin)
+      .find((c) => c.startsWith('nappe_refresh_admin='))!
+      .split(';')[0]!;
+    const shop = await t.http
+      .post('/api/auth/login')
+      .set('Origin', TEST_ORIGIN)
+      .send({ email: client.user.email, password: client.password })
+      .expect(200);
+    const shopCookie = cookiesOf(shop)
+      .find((c) => c.startsWith('nappe_refresh='))!
+      .split(';')[0]!;
+    const both = `${adminCookie}; ${shopCookie}`;
+    const asAdmin = await t.http
+      .post('/api/auth/refresh')
+      .set('Origin', ADMIN_ORIGIN)
+      .set('Cookie', both)
+      .expect(200);
+    expect(asAdmin.body.user.role).toBe('chef');
+    const asShop = await t.http
+      .post('/api/auth/refresh')
+      .set('Origin', TEST_ORIGIN)
+      .set('Cookie', both)
+      .expect(200);
+    expect(asShop.body.user.role).toBe('client');
+  });
+});
+
 describe('POST /api/auth/logout', () => {
   it('ends the session: the access token and the refresh cookie stop working at once', async () => {
     const { user, password } = await makeUser(t);

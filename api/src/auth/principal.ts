@@ -14,5 +14,8 @@ export interface AccessTokenClaims {
 
 export const JWT_ISSUER = 'nappe-api';
 export const JWT_AUDIENCE = 'nappe-apps';
+/** Refresh cookie of the storefront (and of API clients without an Origin). */
 export const REFRESH_COOKIE = 'nappe_refresh';
+/** Refresh cookie of the admin app. */
+export const ADMIN_REFRESH_COOKIE = 'nappe_refresh_admin';
 export const REFRESH_COOKIE_PATH = '/api/auth';

@@ -75,11 +75,17 @@ export class Env {
   @Min(1)
   THROTTLE_LIMIT = 600;
 
-  /** Sign-in / sign-up / refresh attempts per minute per address and account. */
+  /** Sign-in / sign-up attempts per minute per address and account. */
   @Transform(toInt)
   @IsInt()
   @Min(1)
   AUTH_THROTTLE_LIMIT = 10;
+
+  /** Token refreshes per minute per address (every page load of either app makes one). */
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  REFRESH_THROTTLE_LIMIT = 60;
 
   /** Argon2id memory cost in KiB; OWASP's minimum is 19 MiB (19456 KiB), t=2, p=1. */
   @Transform(toInt)
@@ -125,4 +131,19 @@ export function corsOrigins(env: Env): string[] {
   return env.CORS_ORIGINS.split(',')
     .map((o) => o.trim())
     .filter((o) => o !== '' && o !== 'null');
+}
+
+/**
+ * The admin app's origins. Its refresh cookie has a name of its own, so a client signed in on the
+ * storefront and a chef signed in on the admin app in one browser keep separate sessions even
+ * where both apps share a host (cookies ignore ports).
+ */
+export function adminOrigins(env: Env): Set<string> {
+  const origins = new Set<string>();
+  if (!env.PUBLIC_ADMIN_URL) return origins;
+  const url = new URL(env.PUBLIC_ADMIN_URL);
+  origins.add(url.origin);
+  if (url.hostname === 'localhost') origins.add(url.origin.replace('localhost', '127.0.0.1'));
+  if (url.hostname === '127.0.0.1') origins.add(url.origin.replace('127.0.0.1', 'localhost'));
+  return origins;
 }

@@ -1,0 +1,187 @@
+import {
+  Alert,
+  Button,
+  ButtonGroup,
+  Container,
+  EmptyState,
+  Flex,
+  Heading,
+  IconButton,
+  Pagination,
+  Stack,
+  Text,
+} from '@chakra-ui/react';
+import { Role } from '@nappe/shared';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { ChevronLeftIcon, ChevronRightIcon, GuestsIcon } from '../../components/ui/icons';
+import { PageTitle } from '../../components/ui/page-title';
+import { paths } from '../../config/paths';
+import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
+import { RequireRole } from '../../features/auth/components/require-role';
+import { useStudio } from '../../features/studio/api/get-studio';
+import { ApiError } from '../../lib/api-client';
+import { USERS_PAGE_SIZE, usersQueryOptions, useUsers } from '../../features/users/api/get-users';
+import { UsersTable, UsersTableSkeleton } from '../../features/users/components/users-table';
+
+function pageFrom(value: string | null): number {
+  const page = Number(value);
+  return Number.isInteger(page) && page >= 1 ? page : 1;
+}
+
+/** Starts fetching the list while the screen's code arrives — for the chef only. */
+export const teamLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const user = await queryClient.ensureQueryData(meQueryOptions());
+    if (user?.role === Role.Chef) {
+      const page = pageFrom(new URL(request.url).searchParams.get('page'));
+      void queryClient.prefetchQuery(usersQueryOptions({ page, pageSize: USERS_PAGE_SIZE }));
+    }
+    return null;
+  };
+
+export function TeamRoute() {
+  const me = useMe();
+  if (!me.data) return null; // The layout renders only for a signed-in team member.
+  return (
+    <RequireRole user={me.data} roles={[Role.Chef]}>
+      <Team />
+    </RequireRole>
+  );
+}
+
+function Team() {
+  const [searchParams, setSearchParams] = useSearchParams();
+  const page = pageFrom(searchParams.get('page'));
+  const users = useUsers({ page, pageSize: USERS_PAGE_SIZE });
+  const studio = useStudio();
+
+  const goTo = (next: number) =>
+    setSearchParams(next > 1 ? { page: String(next) } : {}, { preventScrollReset: true });
+
+  return (
+    <>
+      <PageTitle>Team</PageTitle>
+      <Container maxW="5xl" py={{ base: '6', md: '10' }}>
+        <Stack gap="2" mb="6">
+          <Text color="caramel.fg" fontWeight="semibold" textStyle="sm">
+            Studio
+          </Text>
+          <Heading as="h1" fontSize={{ base: '3xl', md: '4xl' }} fontWeight="normal">
+            Team and client accounts
+          </Heading>
+          <Text color="fg.muted" maxW="2xl">
+            Everyone with an account at the studio: the team who use this kitchen app, and the
+            clients who book on the storefront.
+          </Text>
+        </Stack>
+
+        {users.isPending ? (
+          <UsersTableSkeleton />
+        ) : users.isError ? (
+          <Alert.Root status="error" role="alert" borderRadius="l2">
+            <Alert.Indicator />
+            <Alert.Content gap="3">
+              <Alert.Title>The list of accounts could not be loaded</Alert.Title>
+              <Alert.Description>
+                {users.error instanceof ApiError && users.error.status >= 500
+                  ? 'The server ran into a problem. Please try again in a moment.'
+                  : users.error.message}
+              </Alert.Description>
+              <Button
+                size="sm"
+                variant="outline"
+                alignSelf="start"
+                loading={users.isFetching}
+                onClick={() => void users.refetch()}
+              >
+                Try again
+              </Button>
+            </Alert.Content>
+          </Alert.Root>
+        ) : users.data.total === 0 ? (
+          <EmptyState.Root
+            borderWidth="1px"
+            borderStyle="dashed"
+            borderColor="border.emphasized"
+            borderRadius="l3"
+            bg="bg.panel"
+          >
+            <EmptyState.Content>
+              <EmptyState.Indicator color="caramel.fg">
+                <GuestsIcon />
+              </EmptyState.Indicator>
+              <EmptyState.Title fontFamily="heading" textStyle="xl">
+                No accounts yet
+              </EmptyState.Title>
+              <EmptyState.Description color="fg.muted" textAlign="center" maxW="md">
+                Team members and clients will be listed here once they have accounts.
+              </EmptyState.Description>
+            </EmptyState.Content>
+          </EmptyState.Root>
+        ) : users.data.items.length === 0 ? (
+          <Stack gap="3" align="start">
+            <Text>This page is past the end of the list.</Text>
+            <Button asChild variant="outline" size="sm">
+              <RouterLink to={paths.team.getHref()}>Back to the first page</RouterLink>
+            </Button>
+          </Stack>
+        ) : (
+          <Stack gap="4" opacity={users.isPlaceholderData ? 0.6 : 1} transition="opacity 0.2s">
+            <UsersTable users={users.data.items} timeZone={studio.data?.timeZone} />
+            <Flex
+              direction={{ base: 'column', sm: 'row' }}
+              justify="space-between"
+              align={{ base: 'start', sm: 'center' }}
+              gap="3"
+            >
+              <Text color="fg.muted" textStyle="sm" aria-live="polite">
+                {rangeText(
+                  users.data.page,
+                  users.data.pageSize,
+                  users.data.items.length,
+                  users.data.total,
+                )}
+              </Text>
+              {users.data.total > users.data.pageSize && (
+                <Pagination.Root
+                  count={users.data.total}
+                  pageSize={users.data.pageSize}
+                  page={page}
+                  onPageChange={(details) => goTo(details.page)}
+                >
+                  <ButtonGroup variant="ghost" size="sm" attached={false}>
+                    <Pagination.PrevTrigger asChild>
+                      <IconButton aria-label="Previous page">
+                        <ChevronLeftIcon />
+                      </IconButton>
+                    </Pagination.PrevTrigger>
+                    <Pagination.Items
+                      render={(item) => (
+                        <IconButton variant={{ base: 'ghost', _selected: 'outline' }}>
+                          {item.value}
+                        </IconButton>
+                      )}
+                    />
+                    <Pagination.NextTrigger asChild>
+                      <IconButton aria-label="Next page">
+                        <ChevronRightIcon />
+                      </IconButton>
+                    </Pagination.NextTrigger>
+                  </ButtonGroup>
+                </Pagination.Root>
+              )}
+            </Flex>
+          </Stack>
+        )}
+      </Container>
+    </>
+  );
+}
+
+function rangeText(page: number, pageSize: number, shown: number, total: number): string {
+  const first = (page - 1) * pageSize + 1;
+  const last = first + shown - 1;
+  return `Showing ${first}–${last} of ${total} ${total === 1 ? 'account' : 'accounts'}`;
+}

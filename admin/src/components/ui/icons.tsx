@@ -1,0 +1,119 @@
+import { createIcon } from '@chakra-ui/react';
+
+// Line icons of our own, drawn on a 24-unit grid with a 1.75 stroke.
+const stroke = {
+  fill: 'none',
+  stroke: 'currentColor',
+  strokeWidth: 1.75,
+  strokeLinecap: 'round',
+  strokeLinejoin: 'round',
+} as const;
+
+export const EyeIcon = /* @__PURE__ */ createIcon({
+  displayName: 'EyeIcon',
+  path: [
+    <path
+      key="a"
+      {...stroke}
+      d="M2.5 12s3.5-6.5 9.5-6.5S21.5 12 21.5 12 18 18.5 12 18.5 2.5 12 2.5 12Z"
+    />,
+    <circle key="b" {...stroke} cx="12" cy="12" r="3" />,
+  ],
+});
+
+export const EyeOffIcon = /* @__PURE__ */ createIcon({
+  displayName: 'EyeOffIcon',
+  path: [
+    <path key="a" {...stroke} d="M4 4l16 16" />,
+    <path
+      key="b"
+      {...stroke}
+      d="M9.9 5.8A9.6 9.6 0 0 1 12 5.5c6 0 9.5 6.5 9.5 6.5a17 17 0 0 1-2.7 3.5"
+    />,
+    <path
+      key="c"
+      {...stroke}
+      d="M6.6 7.7A16.6 16.6 0 0 0 2.5 12s3.5 6.5 9.5 6.5a9 9 0 0 0 4.2-1"
+    />,
+    <path key="d" {...stroke} d="M10 10a3 3 0 0 0 4 4.1" />,
+  ],
+});
+
+/** A spoon coated with a drop of custard: the "nappe" that names the product. */
+export const SpoonIcon = /* @__PURE__ */ createIcon({
+  displayName: 'SpoonIcon',
+  path: [
+    <ellipse key="a" {...stroke} cx="9" cy="8.5" rx="5" ry="6" transform="rotate(-35 9 8.5)" />,
+    <path key="b" {...stroke} d="M12.5 13l7.5 8" />,
+    <path
+      key="c"
+      fill="currentColor"
+      d="M5.4 6.2c1.6-2.3 4.6-2.8 6.4-1.2-.4 1.3-1.2 1.9-1.6 1.1-.7 1.7-1.6 1.6-1.8.6-.9 1.5-1.9 1-1.9-.1-.5.6-1.2.4-1.1-.4Z"
+    />,
+  ],
+});
+
+export const CalendarIcon = /* @__PURE__ */ createIcon({
+  displayName: 'CalendarIcon',
+  path: [
+    <rect key="a" {...stroke} x="3.5" y="5" width="17" height="15.5" rx="2" />,
+    <path key="b" {...stroke} d="M3.5 10h17M8 3v4M16 3v4" />,
+  ],
+});
+
+export const GuestsIcon = /* @__PURE__ */ createIcon({
+  displayName: 'GuestsIcon',
+  path: [
+    <circle key="a" {...stroke} cx="9" cy="8" r="3.5" />,
+    <path key="b" {...stroke} d="M2.5 20c.6-3.6 3.2-5.5 6.5-5.5s5.9 1.9 6.5 5.5" />,
+    <path key="c" {...stroke} d="M16 4.8a3.3 3.3 0 0 1 0 6.4M18 14.8c1.9.7 3.1 2.4 3.5 5.2" />,
+  ],
+});
+
+export const MenuIcon = /* @__PURE__ */ createIcon({
+  displayName: 'MenuIcon',
+  path: <path {...stroke} d="M4 7h16M4 12h16M4 17h16" />,
+});
+
+export const ChevronLeftIcon = /* @__PURE__ */ createIcon({
+  displayName: 'ChevronLeftIcon',
+  path: <path {...stroke} d="M14.5 6l-6 6 6 6" />,
+});
+
+export const ChevronRightIcon = /* @__PURE__ */ createIcon({
+  displayName: 'ChevronRightIcon',
+  path: <path {...stroke} d="M9.5 6l6 6-6 6" />,
+});
+
+export const AllergyIcon = /* @__PURE__ */ createIcon({
+  displayName: 'AllergyIcon',
+  path: [
+    <path key="a" {...stroke} d="M12 3.5l8.5 15h-17z" />,
+    <path key="b" {...stroke} d="M12 10v4M12 16.5v.5" />,
+  ],
+});
+
+export const WhiskIcon = /* @__PURE__ */ createIcon({
+  displayName: 'WhiskIcon',
+  path: [
+    <path key="a" {...stroke} d="M12 13.5V21" />,
+    <path
+      key="b"
+      {...stroke}
+      d="M12 13.5c-4 0-5.5-4-5.5-6.5S9 2.5 12 2.5s5.5 2 5.5 4.5-1.5 6.5-5.5 6.5Z"
+    />,
+    <path
+      key="c"
+      {...stroke}
+      d="M12 13.5c-1.6 0-2.5-4-2.5-6.5s1-4.5 2.5-4.5 2.5 2 2.5 4.5-.9 6.5-2.5 6.5Z"
+    />,
+  ],
+});
+
+export const InboxIcon = /* @__PURE__ */ createIcon({
+  displayName: 'InboxIcon',
+  path: [
+    <path key="a" {...stroke} d="M3.5 13.5l2.5-8h12l2.5 8v5h-17z" />,
+    <path key="b" {...stroke} d="M3.5 13.5h5l1 2h5l1-2h5" />,
+  ],
+});

@@ -1,0 +1,177 @@
+import type { ApiErrorBody, AuthSession } from '@nappe/shared';
+import { env } from '../config/env';
+
+/** An API answer other than 2xx, or no answer at all (`status` 0). */
+export class ApiError extends Error {
+  readonly status: number;
+  /** Human-readable messages from the server (Nest sends one string or a list). */
+  readonly messages: string[];
+  /** Seconds to wait, from `Retry-After` on a 429; null otherwise. */
+  readonly retryAfterSeconds: number | null;
+
+  constructor(status: number, messages: string[], retryAfterSeconds: number | null = null) {
+    super(messages[0] ?? `The request failed (${status}).`);
+    this.name = 'ApiError';
+    this.status = status;
+    this.messages = messages;
+    this.retryAfterSeconds = retryAfterSeconds;
+  }
+}
+
+export const NETWORK_ERROR_MESSAGE =
+  'We could not reach Nappe. Check your connection and try again.';
+
+export interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  body?: unknown;
+  /** false for the sign-in endpoints: no Bearer header, and a 401 is an answer, not an expiry. */
+  auth?: boolean;
+  signal?: AbortSignal;
+}
+
+type SessionListener = (session: AuthSession | null) => void;
+
+export interface ApiClientOptions {
+  basePath?: string;
+  fetch?: typeof fetch;
+}
+
+/**
+ * The one way the app talks to the API. The access token lives in memory only (never in
+ * storage); the refresh token is an HttpOnly cookie the browser sends to /api/auth. A 401
+ * triggers one refresh, shared by every request that failed meanwhile, then one retry.
+ */
+export function createApiClient(options: ApiClientOptions = {}) {
+  const basePath = options.basePath ?? env.apiBasePath;
+  const doFetch = (input: string, init: RequestInit) => (options.fetch ?? fetch)(input, init);
+
+  let accessToken: string | null = null;
+  let refreshing: Promise<AuthSession | null> | null = null;
+  const listeners = new Set<SessionListener>();
+
+  function url(path: string): string {
+    return new URL(`${basePath}${path}`, window.location.origin).toString();
+  }
+
+  function setSession(session: AuthSession): void {
+    accessToken = session.accessToken;
+    listeners.forEach((listener) => listener(session));
+  }
+
+  function clearSession(): void {
+    const hadSession = accessToken !== null;
+    accessToken = null;
+    if (hadSession) listeners.forEach((listener) => listener(null));
+  }
+
+  async function send(path: string, opts: RequestOptions, token: string | null): Promise<Response> {
+    const headers: Record<string, string> = { Accept: 'application/json' };
+    if (opts.body !== undefined) headers['Content-Type'] = 'application/json';
+    if (token) headers.Authorization = `Bearer ${token}`;
+    try {
+      return await doFetch(url(path), {
+        method: opts.method ?? 'GET',
+        headers,
+        body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
+        credentials: 'include',
+        signal: opts.signal,
+      });
+    } catch (error) {
+      if (opts.signal?.aborted) throw error;
+      throw new ApiError(0, [NETWORK_ERROR_MESSAGE]);
+    }
+  }
+
+  /** Single-flight: while one refresh is running, every caller waits for the same answer. */
+  function refreshSession(): Promise<AuthSession | null> {
+    refreshing ??= (async () => {
+      try {
+        const res = await send('/auth/refresh', { method: 'POST' }, null);
+        if (res.ok) {
+          const session = (await res.json()) as AuthSession;
+          setSession(session);
+          return session;
+        }
+        if (res.status === 401 || res.status === 403) {
+          clearSession();
+          return null;
+        }
+        throw await toApiError(res);
+      } finally {
+        refreshing = null;
+      }
+    })();
+    return refreshing;
+  }
+
+  async function request<T>(path: string, opts: RequestOptions = {}): Promise<T> {
+    const useAuth = opts.auth !== false;
+    const tokenSent = useAuth ? accessToken : null;
+    let res = await send(path, opts, tokenSent);
+
+    if (res.status === 401 && useAuth) {
+      // Another request may already have refreshed while this one was in flight.
+      const newer = accessToken !== null && accessToken !== tokenSent ? accessToken : null;
+      const token = newer ?? (await refreshSession())?.accessToken ?? null;
+      if (token === null) throw await toApiError(res);
+      res = await send(path, opts, token);
+      if (res.status === 401) clearSession();
+    }
+
+    if (!res.ok) throw await toApiError(res);
+    if (res.status === 204) return undefined as T;
+    const text = await res.text();
+    return (text ? JSON.parse(text) : undefined) as T;
+  }
+
+  return {
+    request,
+    get: <T>(path: string, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
+      request<T>(path, { ...opts, method: 'GET' }),
+    post: <T>(path: string, body?: unknown, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
+      request<T>(path, { ...opts, method: 'POST', body }),
+    refreshSession,
+    /** On app start: trade the refresh cookie, if any, for a session. Null when signed out. */
+    restoreSession: (): Promise<AuthSession | null> => refreshSession(),
+    setSession,
+    clearSession,
+    getAccessToken: () => accessToken,
+    /** Told when a session starts, is refreshed (a session) or ends (null). */
+    subscribe(listener: SessionListener): () => void {
+      listeners.add(listener);
+      return () => listeners.delete(listener);
+    },
+  };
+}
+
+export type ApiClient = ReturnType<typeof createApiClient>;
+
+async function toApiError(res: Response): Promise<ApiError> {
+  let messages: string[] = [];
+  try {
+    const body = (await res.json()) as Partial<ApiErrorBody>;
+    if (Array.isArray(body.message)) messages = body.message.map(String);
+    else if (typeof body.message === 'string') messages = [body.message];
+  } catch {
+    // Not JSON (a proxy error page, an empty body): fall back to a generic message below.
+  }
+  if (messages.length === 0) messages = [fallbackMessage(res.status)];
+  return new ApiError(res.status, messages, parseRetryAfter(res.headers.get('Retry-After')));
+}
+
+function fallbackMessage(status: number): string {
+  if (status === 429) return 'Too many attempts. Please wait a little and try again.';
+  if (status >= 500) return 'Something went wrong on our side. Please try again in a moment.';
+  return `The request failed (${status}).`;
+}
+
+/** `Retry-After` is either delay-seconds or an HTTP date (RFC 9110 §10.2.3). */
+export function parseRetryAfter(value: string | null, now: number = Date.now()): number | null {
+  if (value === null || value.trim() === '') return null;
+  if (/^\d+$/.test(value.trim())) return Number(value.trim());
+  const date = Date.parse(value);
+  if (Number.isNaN(date)) return null;
+  return Math.max(0, Math.ceil((date - now) / 1000));
+}
+
+export const api = createApiClient();

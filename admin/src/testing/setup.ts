@@ -1,0 +1,32 @@
+import '@testing-library/jest-dom/vitest';
+import { cleanup, configure } from '@testing-library/react';
+import { afterAll, afterEach, beforeAll } from 'vitest';
+import { api } from '../lib/api-client';
+import { server } from './server';
+
+// Lazy route chunks load on first visit; on a busy 2-core machine that can take over a second.
+configure({ asyncUtilTimeout: 4000 });
+
+beforeAll(() => server.listen({ onUnhandledRequest: 'error' }));
+afterEach(() => {
+  cleanup();
+  server.resetHandlers();
+  api.clearSession();
+});
+afterAll(() => server.close());
+
+// jsdom lacks a few browser APIs that Chakra's components ask for.
+if (!window.matchMedia) {
+  window.matchMedia = (query: string) =>
+    ({
+      matches: false,
+      media: query,
+      onchange: null,
+      addListener: () => {},
+      removeListener: () => {},
+      addEventListener: () => {},
+      removeEventListener: () => {},
+      dispatchEvent: () => false,
+    }) as MediaQueryList;
+}
+window.scrollTo = (() => {}) as typeof window.scrollTo;

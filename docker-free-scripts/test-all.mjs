@@ -1,0 +1,30 @@
+// `npm test`: everything CI checks, in the order that fails fastest.
+//   1. lint and type-check every workspace
+//   2. unit tests of every workspace, and the API's e2e tests (supertest on a temporary SQLite file)
+//   3. the browser suite in Chromium against the running system
+// Set NAPPE_SKIP_BROWSER=1 to leave out step 3 while developing (CI never does).
+import { spawnSync } from 'node:child_process';
+import { performance } from 'node:perf_hooks';
+import { ROOT } from './lib/system.mjs';
+
+const steps = [
+  ['lint', ['npm', 'run', 'lint', '--silent']],
+  ['typecheck', ['npm', 'run', 'typecheck', '--silent']],
+  ['unit and API tests', ['npm', 'run', 'test', '--workspaces', '--if-present', '--silent']],
+];
+if (process.env.NAPPE_SKIP_BROWSER !== '1')
+  steps.push(['browser tests', ['node', 'docker-free-scripts/browser-tests.mjs']]);
+
+const timings = [];
+for (const [name, [command, ...args]] of steps) {
+  const start = performance.now();
+  console.log(`\n▶ ${name}`);
+  const result = spawnSync(command, args, { cwd: ROOT, stdio: 'inherit' });
+  const seconds = ((performance.now() - start) / 1000).toFixed(1);
+  timings.push(`${name}: ${seconds} s`);
+  if (result.status !== 0) {
+    console.error(`\n✖ ${name} failed (exit ${result.status}) after ${seconds} s`);
+    process.exit(result.status ?? 1);
+  }
+}
+console.log(`\n✔ all checks passed — ${timings.join(' · ')}`);

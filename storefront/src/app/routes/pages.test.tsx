@@ -1,0 +1,85 @@
+import { screen, within } from '@testing-library/react';
+import { http, HttpResponse } from 'msw';
+import { describe, expect, it } from 'vitest';
+import { studioCard } from '../../testing/fixtures';
+import { renderApp } from '../../testing/render-app';
+import { server } from '../../testing/server';
+
+describe('public pages', () => {
+  it('Home shows the studio card, the offer and the three steps', async () => {
+    renderApp('/');
+    expect(
+      await screen.findByRole('heading', { level: 1, name: /Plated desserts for the evenings/ }),
+    ).toBeInTheDocument();
+    expect(await screen.findByText(`${studioCard.name} · ${studioCard.city}`)).toBeInTheDocument();
+    for (const occasion of ['Dinner parties', 'Weddings', 'Company dinners', 'Private tastings']) {
+      expect(screen.getByRole('heading', { name: occasion })).toBeInTheDocument();
+    }
+    const steps = within(screen.getByRole('region', { name: /Three steps/ })).getAllByRole(
+      'listitem',
+    );
+    expect(steps).toHaveLength(3);
+  });
+
+  it('Home still reads well when the studio card cannot be loaded', async () => {
+    server.use(
+      http.get('/api/studio', () =>
+        HttpResponse.json({ statusCode: 500, message: 'Internal server error' }, { status: 500 }),
+      ),
+    );
+    renderApp('/');
+    expect(await screen.findByText('A dessert studio')).toBeInTheDocument();
+    expect(
+      screen.getByText(/A pastry studio that brings a finished, plated dessert/),
+    ).toBeInTheDocument();
+  });
+
+  it('the header offers Sign in and Create account to a visitor, with a skip link', async () => {
+    renderApp('/how-booking-works');
+    const header = within(await screen.findByRole('banner'));
+    expect(await header.findByRole('link', { name: 'Sign in' })).toHaveAttribute(
+      'href',
+      '/sign-in?redirectTo=%2Fhow-booking-works',
+    );
+    expect(header.getByRole('link', { name: 'Create account' })).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Skip to content' })).toHaveAttribute(
+      'href',
+      '#main-content',
+    );
+    const nav = within(screen.getByRole('navigation', { name: 'Main' }));
+    expect(nav.getByRole('link', { name: 'How booking works' })).toHaveAttribute(
+      'aria-current',
+      'page',
+    );
+  });
+
+  it('How booking works explains the four steps and that menus open shortly', async () => {
+    renderApp('/how-booking-works');
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'How booking works' }),
+    ).toBeInTheDocument();
+    expect(screen.getByText('Menus and online booking open shortly')).toBeInTheDocument();
+    for (const step of [
+      'Choose a menu',
+      'Tell us the date and your guests',
+      'Pay a deposit',
+      'The chef confirms',
+    ]) {
+      expect(screen.getByRole('heading', { name: new RegExp(step) })).toBeInTheDocument();
+    }
+    expect(screen.getByRole('heading', { name: 'If your plans change' })).toBeInTheDocument();
+  });
+
+  it('an unknown address shows the 404 page inside the layout', async () => {
+    renderApp('/menus/this-does-not-exist');
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'This page is not on the menu' }),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Back to the home page' })).toHaveAttribute(
+      'href',
+      '/',
+    );
+    expect(screen.getByRole('banner')).toBeInTheDocument();
+    expect(document.title).toBe('Page not found · Nappe');
+  });
+});

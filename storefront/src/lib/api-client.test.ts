@@ -1,0 +1,212 @@
+import { http, HttpResponse } from 'msw';
+import { describe, expect, it, vi } from 'vitest';
+import { clientUser, sessionFor } from '../testing/fixtures';
+import { server } from '../testing/server';
+import { ApiError, createApiClient, parseRetryAfter } from './api-client';
+
+const OLD = 'expired-token';
+const NEW = 'fresh-token';
+
+/** A protected endpoint that accepts only the fresh token, and a counted refresh endpoint. */
+function expiredTokenApi() {
+  const seen: (string | null)[] = [];
+  let refreshes = 0;
+  server.use(
+    http.get('/api/auth/me', ({ request }) => {
+      const auth = request.headers.get('Authorization');
+      seen.push(auth);
+      return auth === `Bearer ${NEW}`
+        ? HttpResponse.json(clientUser)
+        : HttpResponse.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 });
+    }),
+    http.post('/api/auth/refresh', async ({ request }) => {
+      refreshes += 1;
+      expect(request.credentials).toBe('include');
+      // Slow enough that every failed request is waiting on the same refresh.
+      await new Promise((resolve) => setTimeout(resolve, 30));
+      return HttpResponse.json(sessionFor(clientUser, NEW));
+    }),
+  );
+  return { seen, refreshes: () => refreshes };
+}
+
+describe('api client', () => {
+  it('attaches the Bearer token and keeps it in memory only', async () => {
+    const client = createApiClient();
+    const { seen } = expiredTokenApi();
+    client.setSession(sessionFor(clientUser, NEW));
+
+    await expect(client.get('/auth/me')).resolves.toEqual(clientUser);
+    expect(seen).toEqual([`Bearer ${NEW}`]);
+    expect(window.localStorage.length).toBe(0);
+    expect(window.sessionStorage.length).toBe(0);
+  });
+
+  it('on a 401 refreshes once and retries the request', async () => {
+    const client = createApiClient();
+    const api = expiredTokenApi();
+    client.setSession(sessionFor(clientUser, OLD));
+
+    await expect(client.get('/auth/me')).resolves.toEqual(clientUser);
+    expect(api.refreshes()).toBe(1);
+    expect(api.seen).toEqual([`Bearer ${OLD}`, `Bearer ${NEW}`]);
+    expect(client.getAccessToken()).toBe(NEW);
+  });
+
+  it('shares one refresh between concurrent 401s (single flight)', async () => {
+    const client = createApiClient();
+    const api = expiredTokenApi();
+    client.setSession(sessionFor(clientUser, OLD));
+
+    const results = await Promise.all([
+      client.get('/auth/me'),
+      client.get('/auth/me'),
+      client.get('/auth/me'),
+      client.get('/auth/me'),
+    ]);
+
+    expect(results).toEqual([clientUser, clientUser, clientUser, clientUser]);
+    expect(api.refreshes()).toBe(1);
+    expect(api.seen.filter((h) => h === `Bearer ${OLD}`)).toHaveLength(4);
+    expect(api.seen.filter((h) => h === `Bearer ${NEW}`)).toHaveLength(4);
+  });
+
+  it('retries with the newer token, without a second refresh, when one landed meanwhile', async () => {
+    const client = createApiClient();
+    let refreshes = 0;
+    const seen: (string | null)[] = [];
+    server.use(
+      http.get('/api/auth/me', async ({ request }) => {
+        const auth = request.headers.get('Authorization');
+        seen.push(auth);
+        if (auth === `Bearer ${NEW}`) return HttpResponse.json(clientUser);
+        // The old token's 401 arrives only after the other refresh has finished.
+        await new Promise((resolve) => setTimeout(resolve, 60));
+        return HttpResponse.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 });
+      }),
+      http.post('/api/auth/refresh', async () => {
+        refreshes += 1;
+        await new Promise((resolve) => setTimeout(resolve, 10));
+        return HttpResponse.json(sessionFor(clientUser, NEW));
+      }),
+    );
+    client.setSession(sessionFor(clientUser, OLD));
+
+    const pending = client.get('/auth/me');
+    await client.refreshSession();
+
+    await expect(pending).resolves.toEqual(clientUser);
+    expect(refreshes).toBe(1);
+    expect(seen).toEqual([`Bearer ${OLD}`, `Bearer ${NEW}`]);
+  });
+
+  it('ends the session when the refresh is refused, and says so', async () => {
+    const client = createApiClient();
+    const listener = vi.fn();
+    client.subscribe(listener);
+    server.use(
+      http.get('/api/auth/me', () =>
+        HttpResponse.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 }),
+      ),
+    );
+    client.setSession(sessionFor(clientUser, OLD));
+    listener.mockClear();
+
+    const error = await client.get('/auth/me').catch((e: unknown) => e);
+
+    expect(error).toBeInstanceOf(ApiError);
+    expect((error as ApiError).status).toBe(401);
+    expect(client.getAccessToken()).toBeNull();
+    expect(listener).toHaveBeenCalledWith(null);
+  });
+
+  it('never refreshes for the sign-in endpoints: their 401 is an answer', async () => {
+    const client = createApiClient();
+    let refreshes = 0;
+    server.use(
+      http.post('/api/auth/refresh', () => {
+        refreshes += 1;
+        return HttpResponse.json(sessionFor(clientUser, NEW));
+      }),
+      http.post('/api/auth/login', () =>
+        HttpResponse.json(
+          { statusCode: 401, message: 'Wrong e-mail or password.' },
+          { status: 401 },
+        ),
+      ),
+    );
+
+    const error = (await client
+      .post('/auth/login', { email: 'a@b.test', password: 'x' }, { auth: false })
+      .catch((e: unknown) => e)) as ApiError;
+
+    expect(error.messages).toEqual(['Wrong e-mail or password.']);
+    expect(refreshes).toBe(0);
+  });
+
+  it('restores a session from the cookie on start, or reports nobody signed in', async () => {
+    const client = createApiClient();
+    expect(await client.restoreSession()).toBeNull(); // default handler: 401
+
+    server.use(
+      http.post('/api/auth/refresh', () => HttpResponse.json(sessionFor(clientUser, NEW))),
+    );
+    expect((await client.restoreSession())?.user).toEqual(clientUser);
+    expect(client.getAccessToken()).toBe(NEW);
+  });
+
+  it('turns Nest error bodies into messages, lists included', async () => {
+    const client = createApiClient();
+    server.use(
+      http.post('/api/auth/register', () =>
+        HttpResponse.json(
+          {
+            statusCode: 400,
+            message: ['email must be an email', 'property nickname should not exist'],
+            error: 'Bad Request',
+          },
+          { status: 400 },
+        ),
+      ),
+    );
+    const error = (await client
+      .post('/auth/register', {}, { auth: false })
+      .catch((e: unknown) => e)) as ApiError;
+    expect(error.status).toBe(400);
+    expect(error.messages).toEqual([
+      'email must be an email',
+      'property nickname should not exist',
+    ]);
+  });
+
+  it('answers a 204 with no body', async () => {
+    const client = createApiClient();
+    server.use(http.post('/api/auth/logout', () => new HttpResponse(null, { status: 204 })));
+    client.setSession(sessionFor(clientUser, NEW));
+    await expect(client.post('/auth/logout')).resolves.toBeUndefined();
+  });
+
+  it('reports an unreachable server as status 0 with a readable message', async () => {
+    const client = createApiClient();
+    server.use(http.get('/api/studio', () => HttpResponse.error()));
+    const error = (await client.get('/studio').catch((e: unknown) => e)) as ApiError;
+    expect(error.status).toBe(0);
+    expect(error.message).toMatch(/could not reach Nappe/);
+  });
+});
+
+describe('parseRetryAfter', () => {
+  // RFC 9110 §10.2.3: Retry-After = HTTP-date / delay-seconds.
+  it('reads delay-seconds', () => {
+    expect(parseRetryAfter('120')).toBe(120);
+  });
+  it('reads an HTTP-date relative to now', () => {
+    // The example date of RFC 9110 §5.6.7 ("Sun, 06 Nov 1994 08:49:37 GMT").
+    const now = Date.parse('Sun, 06 Nov 1994 08:48:37 GMT');
+    expect(parseRetryAfter('Sun, 06 Nov 1994 08:49:37 GMT', now)).toBe(60);
+  });
+  it('ignores absent or unreadable values', () => {
+    expect(parseRetryAfter(null)).toBeNull();
+    expect(parseRetryAfter('soon')).toBeNull();
+  });
+});

@@ -1,0 +1,17 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { AppProvider } from './app/provider';
+import { AppRouter } from './app/router';
+import { createQueryClient } from './lib/query-client';
+
+const queryClient = createQueryClient();
+const root = document.getElementById('root');
+if (!root) throw new Error('The page has no #root element.');
+
+createRoot(root).render(
+  <StrictMode>
+    <AppProvider queryClient={queryClient}>
+      <AppRouter queryClient={queryClient} />
+    </AppProvider>
+  </StrictMode>,
+);
