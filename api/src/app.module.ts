@@ -8,7 +8,9 @@ import { AppThrottlerGuard } from './auth/guards/throttler.guard.js';
 import { ConfigModule } from './config/config.module.js';
 import { Env } from './config/env.js';
 import { DatabaseModule } from './database/database.module.js';
+import { FilesModule } from './files/files.module.js';
 import { HealthController } from './health/health.controller.js';
+import { KitchenModule } from './kitchen/kitchen.module.js';
 import { StudioModule } from './studio/studio.module.js';
 import { UsersModule } from './users/users.module.js';
 
@@ -25,6 +27,8 @@ import { UsersModule } from './users/users.module.js';
     AuthModule,
     UsersModule,
     StudioModule,
+    KitchenModule,
+    FilesModule,
   ],
   controllers: [HealthController],
   providers: [

@@ -18,6 +18,9 @@ export const JSON_BODY_LIMIT = '256kb';
 /** Routes that take something other than JSON (webhooks read the raw body themselves). */
 const NON_JSON_PREFIXES = ['/api/payments/webhook'];
 
+/** Photo uploads take multipart/form-data, on these routes only. */
+const MULTIPART_ROUTES = [/^\/api\/(desserts|menus)\/[^/]+\/photo$/];
+
 /**
  * Everything that makes the app the app, shared by `main.ts` and the e2e tests so both run
  * the same middleware in the same order.
@@ -112,5 +115,8 @@ function requireJsonBodies(req: Request, _res: Response, next: NextFunction): vo
   if (!hasBody || !['POST', 'PUT', 'PATCH', 'DELETE'].includes(req.method)) return next();
   if (NON_JSON_PREFIXES.some((p) => req.path.startsWith(p))) return next();
   if (req.is('application/json')) return next();
+  if (req.is('multipart/form-data') && MULTIPART_ROUTES.some((r) => r.test(req.path))) {
+    return next();
+  }
   next(new UnsupportedMediaTypeException('Send the body as application/json.'));
 }

@@ -2,6 +2,7 @@ import { Role } from '@nappe/shared';
 import type { DataSource } from 'typeorm';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
+import { seedDemoCatalogue } from './demo-catalogue-seed.js';
 
 /** The one password of every demo account; production refuses to seed them. */
 export const DEMO_PASSWORD = 'plated-demo-2026';
@@ -54,5 +55,6 @@ export async function seedDemo(
       await manager.save(manager.create(User, { ...account, passwordHash }));
     }
   });
+  await seedDemoCatalogue(dataSource); // renders its illustrations outside any transaction
   return { seeded: true, accounts };
 }
