@@ -30,3 +30,4 @@ export * from './prep-schedule/working-calendar.js';
 export * from './prep-schedule/prep-schedule.js';
 export * from './prep-plan/prep-order.js';
 export * from './prep-plan/prep-plan.js';
+export * from './orders/order-api.js';
