@@ -60,7 +60,7 @@ try {
   );
   status = result.status ?? 1;
 } catch (error) {
-  console.error(error.message);
+  console.error(error instanceof Error ? error.message : error);
 } finally {
   system.stop();
   await system.result.catch(() => undefined);

@@ -40,7 +40,7 @@ system.result.then(
 try {
   await waitUntilReady(config);
 } catch (error) {
-  console.error(error.message);
+  console.error(error instanceof Error ? error.message : error);
   stop();
   process.exitCode = 1;
 }
@@ -48,6 +48,7 @@ try {
 if (!stopping) {
   const { urls } = config;
   const seconds = ((performance.now() - started) / 1000).toFixed(1);
+  /** @param {string} s */
   const pad = (s) => s.padEnd(12);
   console.log(`
   Nappe is running (ready in ${seconds} s). Ctrl-C stops everything.
@@ -59,6 +60,6 @@ if (!stopping) {
   ${pad('Payments')}${urls.payments}     local test payment service (no real money)
 
   Demo accounts (password ${DEMO_PASSWORD}):
-${DEMO_ACCOUNTS.map((a) => `    ${pad(a.role)}${a.email.padEnd(20)} → ${urls[a.app]}`).join('\n')}
+${DEMO_ACCOUNTS.map((a) => `    ${pad(a.role)}${a.email.padEnd(20)} → ${urls[/** @type {'admin' | 'storefront'} */ (a.app)]}`).join('\n')}
 `);
 }

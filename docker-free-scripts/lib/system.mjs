@@ -17,9 +17,19 @@ export const DEMO_ACCOUNTS = [
   { role: 'client', email: 'client@nappe.test', app: 'storefront' },
 ];
 
+/** @type {(value: string | undefined, fallback: number) => number} */
 const int = (value, fallback) => (value ? Number.parseInt(value, 10) : fallback);
 
-/** Ports and addresses, overridable from the environment (the browser tests use their own set). */
+/**
+ * @typedef {{ api: number, storefront: number, admin: number, smtp: number, mailWeb: number, payments: number }} Ports
+ * @typedef {{ ports: Ports, urls: Record<'api' | 'apiDocs' | 'storefront' | 'admin' | 'mail' | 'payments', string>, databasePath: string }} SystemConfig
+ */
+
+/**
+ * Ports and addresses, overridable from the environment (the browser tests use their own set).
+ * @param {NodeJS.ProcessEnv} env
+ * @returns {SystemConfig}
+ */
 export function systemConfig(env = process.env) {
   const ports = {
     api: int(env.NAPPE_API_PORT, 3000),
@@ -41,6 +51,11 @@ export function systemConfig(env = process.env) {
   return { ports, urls, databasePath };
 }
 
+/**
+ * @param {string} command
+ * @param {string[]} args
+ * @param {import('node:child_process').SpawnSyncOptions} options
+ */
 function run(command, args, options = {}) {
   const result = spawnSync(command, args, { cwd: ROOT, stdio: 'inherit', ...options });
   if (result.status !== 0) {
@@ -53,7 +68,11 @@ export function buildAll() {
   run('npm', ['run', 'build', '--silent']);
 }
 
-/** The environment every process of the system shares. */
+/**
+ * The environment every process of the system shares.
+ * @param {SystemConfig} config
+ * @param {Record<string, string>} extra
+ */
 function systemEnv(config, extra = {}) {
   const { ports, databasePath } = config;
   const appOrigins = [ports.storefront, ports.admin].flatMap((p) => [
@@ -81,7 +100,10 @@ function systemEnv(config, extra = {}) {
   };
 }
 
-/** Applies migrations and seeds the demo studio into an empty database. */
+/**
+ * Applies migrations and seeds the demo studio into an empty database.
+ * @param {SystemConfig} config
+ */
 export function migrateAndSeed(config) {
   mkdirSync(dirname(config.databasePath), { recursive: true });
   run('node', ['api/dist/database/cli.js', 'seed'], { env: systemEnv(config) });
@@ -90,6 +112,8 @@ export function migrateAndSeed(config) {
 /**
  * Starts every process. Returns the concurrently handle; `stop()` ends them all.
  * Output is prefixed with the process name; `quiet` drops it (the browser tests).
+ * @param {SystemConfig} config
+ * @param {{ quiet?: boolean, env?: Record<string, string> }} options
  */
 export function startSystem(config, { quiet = false, env = {} } = {}) {
   const sharedEnv = systemEnv(config, env);
@@ -142,9 +166,13 @@ function devNull() {
   return new Writable({ write: (_chunk, _encoding, callback) => callback() });
 }
 
-/** Waits until every service answers, or throws naming the ones that did not. */
+/**
+ * Waits until every service answers, or throws naming the ones that did not.
+ * @param {SystemConfig} config
+ */
 export async function waitUntilReady(config, timeoutMs = 90_000) {
   const { ports } = config;
+  /** @type {Record<string, string>} */
   const probes = {
     api: `http://127.0.0.1:${ports.api}/api/health`,
     storefront: `http://localhost:${ports.storefront}/`,
