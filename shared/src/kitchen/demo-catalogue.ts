@@ -1,12 +1,13 @@
-import { TRADE_PRACTICE } from './reference-steps.js';
+import { COUVERTURE_TEMPERING, TRADE_PRACTICE } from './reference-steps.js';
 import { withSafetyCautions } from './safety.js';
 import type { Dessert, Ingredient, KitchenCatalogue, Menu, Recipe } from './types.js';
 
 /**
  * The demo studio's catalogue, invented for the seed: names, recipes, prices and menus are ours.
- * Compositions come from USDA FoodData Central (SR Legacy) where the record is pinned in
- * REFERENCES.md; the others are typical values for the kind of product, marked "typical" —
- * demo data, not an oracle. Prices are invented, in EUR cents.
+ * Compositions come from USDA FoodData Central (SR Legacy) where a record is pinned: its FDC ID is
+ * in `composition.source` (those in REFERENCES.md are also checked in the mix-balance tests). The
+ * others are typical values for the kind of product, marked "typical" (and "from memory" where
+ * recalled) — demo data, not an oracle. Prices are invented, in EUR cents.
  */
 
 const none = { contains: [], mayContain: [] };
@@ -255,9 +256,228 @@ export const DEMO_INGREDIENTS: Ingredient[] = [
     dietary: plant,
     composition: { water: 100, fat: 0, source: 'definition' },
   },
+
+  // ---- Added for the autumn and winter desserts. Composition per 100 g from the USDA FoodData
+  // Central SR Legacy record named in `source`; a figure recalled rather than read from the record,
+  // and every value with no record, is marked "from memory". Demo data only, never an oracle.
+  {
+    id: 'ing-honey',
+    name: 'Wildflower honey',
+    labelName: 'honey',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 1290 },
+    // USDA FDC household portion (REFERENCES.md): 1 US cup of honey ≈ 339 g → 339 / 236.5882365.
+    densityGPerMl: 1.433,
+    allergens: none,
+    // Honey is vegetarian but not vegan: the roll-up's dietary flags show it.
+    dietary: { animalOrigins: ['honey'], alcohol: false },
+    // FDC 169640: water 17.10, carbohydrate 82.40. The split of its sugars (fructose 40.94, glucose
+    // 35.75, sucrose 0.89) is from memory; maltose and galactose are left in other solids, as no
+    // sweetener kind models them.
+    composition: {
+      water: 17.1,
+      fat: 0,
+      sugars: { fructose: 40.94, dextrose: 35.75, sucrose: 0.89 },
+      source: 'USDA FDC 169640',
+    },
+  },
+  {
+    id: 'ing-rye-flour',
+    name: 'Rye flour, medium',
+    labelName: 'rye flour',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 210 },
+    // Rye is EU gluten (Annex II 1) but not a US major allergen; the mill declares wheat and
+    // barley traces, which the US view shows as "may contain wheat".
+    allergens: { contains: [{ food: 'rye' }], mayContain: ['wheat', 'barley'] },
+    dietary: plant,
+    // Typical medium rye flour, from memory (no record pinned).
+    composition: { water: 10.5, fat: 1.8, source: 'typical, from memory' },
+  },
+  {
+    id: 'ing-quince',
+    name: 'Quinces',
+    labelName: 'quince',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 480 },
+    allergens: none,
+    dietary: plant,
+    // FDC 168163 (Quinces, raw): fat 0.10 (protein 0.40, carbohydrate 15.30); water 83.80 from
+    // memory.
+    composition: { water: 83.8, fat: 0.1, source: 'USDA FDC 168163' },
+  },
+  {
+    id: 'ing-apple-brandy',
+    name: 'Apple brandy 40 % vol',
+    labelName: 'apple brandy',
+    purchase: { packSize: 70, packUnit: 'cl', packPriceMinor: 3490 },
+    // Density of a 40 % vol spirit ≈ 0.95 g/ml (from memory).
+    densityGPerMl: 0.95,
+    allergens: none,
+    dietary: { animalOrigins: [], alcohol: true },
+    // 40 % vol × 0.789 g/ml ethanol ÷ 0.95 g/ml = 33.2 g ethanol per 100 g.
+    composition: { water: 64, fat: 0, alcohol: 33.2, source: 'typical, from memory' },
+  },
+  {
+    id: 'ing-blackcurrants',
+    name: 'Blackcurrants, frozen',
+    labelName: 'blackcurrants',
+    purchase: { packSize: 2.5, packUnit: 'kg', packPriceMinor: 1590 },
+    allergens: none,
+    dietary: plant,
+    // FDC 173963 (Currants, european black, raw): water 81.96, fat 0.41. The record gives no
+    // sugars; the split below (about 7.5 g per 100 g) is from memory.
+    composition: {
+      water: 81.96,
+      fat: 0.41,
+      sugars: { fructose: 4, dextrose: 3, sucrose: 0.5 },
+      source: 'USDA FDC 173963 (water, fat); sugars from memory',
+    },
+  },
+  {
+    id: 'ing-blackcurrant-leaves',
+    name: 'Blackcurrant leaves, fresh',
+    labelName: 'blackcurrant leaves',
+    purchase: { packSize: 100, packUnit: 'g', packPriceMinor: 350 },
+    allergens: none,
+    dietary: plant,
+    notes: 'Young leaves, picked the day before; infused and strained out.',
+    // Fresh leaves, from memory.
+    composition: { water: 75, fat: 1, source: 'typical, from memory' },
+  },
+  {
+    id: 'ing-lemon-juice',
+    name: 'Lemon juice, fresh',
+    labelName: 'lemon juice',
+    purchase: { packSize: 1, packUnit: 'l', packPriceMinor: 520 },
+    // USDA FDC 167747 household portion: 1 US cup = 244 g → 244 / 236.5882365.
+    densityGPerMl: 1.031,
+    allergens: none,
+    dietary: plant,
+    // FDC 167747 (Lemon juice, raw): fat 0.24 (protein 0.35, carbohydrate 6.90); water 92.31 and
+    // the sugars (2.52) by kind from memory.
+    composition: {
+      water: 92.31,
+      fat: 0.24,
+      sugars: { dextrose: 0.99, fructose: 1.1, sucrose: 0.43 },
+      source: 'USDA FDC 167747',
+    },
+  },
+  {
+    id: 'ing-dark-chocolate',
+    name: 'Dark chocolate couverture 70 %',
+    labelName:
+      'dark chocolate (cocoa mass, sugar, cocoa butter, emulsifier: soya lecithin, natural vanilla flavouring)',
+    purchase: { packSize: 2.5, packUnit: 'kg', packPriceMinor: 4850 },
+    // Soya lecithin is not exempt (Annex II 6 covers refined oil, not lecithin): soybeans.
+    allergens: { contains: [{ food: 'soybean' }], mayContain: ['milk', 'hazelnut', 'almond'] },
+    dietary: plant,
+    // FDC 170273 (Chocolate, dark, 70-85% cacao solids): fat 42.63, sugars 23.99 (counted as
+    // sucrose); water 1.37 from memory.
+    composition: { water: 1.37, fat: 42.63, sugars: { sucrose: 23.99 }, source: 'USDA FDC 170273' },
+  },
+  {
+    id: 'ing-greek-yogurt',
+    name: 'Greek-style yogurt, whole milk',
+    labelName: 'yogurt (milk)',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 560 },
+    allergens: dairy,
+    dietary: plant,
+    // FDC 171304 (Yogurt, Greek, plain, whole milk): water 81.30, fat 5.00 from memory;
+    // MSNF = 100 − water − fat (REFERENCES.md).
+    composition: { water: 81.3, fat: 5, milkFat: 5, msnf: 13.7, source: 'USDA FDC 171304' },
+  },
+  {
+    id: 'ing-fish-gelatin',
+    name: 'Fish gelatine powder, 200 Bloom',
+    labelName: 'fish gelatine',
+    purchase: { packSize: 500, packUnit: 'g', packPriceMinor: 2890 },
+    // Fish gelatine in a dessert is fish (Annex II 4 exempts it only as a vitamin carrier or a
+    // fining agent): declared in the EU and the US, and not vegetarian.
+    allergens: { contains: [{ food: 'fish' }], mayContain: [] },
+    dietary: { animalOrigins: [], gelatin: 'fish', alcohol: false },
+    // Dry gelatine powder, from memory.
+    composition: { water: 11, fat: 0.1, source: 'typical, from memory' },
+  },
+  {
+    id: 'ing-sea-buckthorn-juice',
+    name: 'Sea-buckthorn juice, pure',
+    labelName: 'sea-buckthorn juice',
+    purchase: { packSize: 75, packUnit: 'cl', packPriceMinor: 1290 },
+    // From memory (a cloudy, oily fruit juice).
+    densityGPerMl: 1.03,
+    allergens: none,
+    dietary: plant,
+    // No USDA record; typical pressed juice, from memory.
+    composition: {
+      water: 88,
+      fat: 2,
+      sugars: { fructose: 1.5, dextrose: 2 },
+      source: 'typical, from memory',
+    },
+  },
+  {
+    id: 'ing-buckwheat-groats',
+    name: 'Buckwheat groats, roasted',
+    labelName: 'roasted buckwheat',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 520 },
+    // Buckwheat is in neither list; the packer declares wheat traces.
+    allergens: { contains: [], mayContain: ['wheat'] },
+    dietary: plant,
+    // Roasted dry groats, from memory (no record pinned).
+    composition: { water: 8.4, fat: 2.7, source: 'typical, from memory' },
+  },
+  {
+    id: 'ing-pine-nuts',
+    name: 'Pine nuts',
+    labelName: 'pine nuts',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 5200 },
+    // A US tree nut (FDA Edition 5) but not one of the EU's eight nuts: the two views differ.
+    allergens: { contains: [{ food: 'pine_nut' }], mayContain: ['almond', 'cashew'] },
+    dietary: plant,
+    // FDC 170591 (Nuts, pine nuts, dried): fat 68.37; water 2.28 from memory.
+    composition: { water: 2.28, fat: 68.37, source: 'USDA FDC 170591' },
+  },
+  {
+    id: 'ing-sesame-seeds',
+    name: 'Sesame seeds, white',
+    labelName: 'sesame seeds',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 690 },
+    allergens: { contains: [{ food: 'sesame' }], mayContain: ['peanut'] },
+    dietary: plant,
+    // FDC 170150 (Seeds, sesame seeds, whole, dried): water 4.69, fat 49.67 from memory.
+    composition: { water: 4.69, fat: 49.67, source: 'USDA FDC 170150' },
+  },
+  {
+    id: 'ing-figs',
+    name: 'Figs, fresh',
+    labelName: 'figs',
+    purchase: { packSize: 1, packUnit: 'kg', packPriceMinor: 950 },
+    allergens: none,
+    dietary: plant,
+    // FDC 173024 (Figs, raw): water 79.11, fat 0.30 (sugars 16.26 are not split by kind; left out).
+    composition: { water: 79.11, fat: 0.3, source: 'USDA FDC 173024' },
+  },
+  {
+    id: 'ing-fig-leaves',
+    name: 'Fig leaves, fresh',
+    labelName: 'fig leaves',
+    purchase: { packSize: 50, packUnit: 'g', packPriceMinor: 250 },
+    allergens: none,
+    dietary: plant,
+    notes: 'Lightly toasted, infused and strained out.',
+    composition: { water: 78, fat: 1, source: 'typical, from memory' },
+  },
+  {
+    id: 'ing-smoked-tea',
+    name: 'Smoked black tea, loose leaf',
+    labelName: 'smoked black tea',
+    purchase: { packSize: 100, packUnit: 'g', packPriceMinor: 990 },
+    allergens: none,
+    dietary: plant,
+    composition: { water: 6, fat: 2, source: 'typical, from memory' },
+  },
 ];
 
 const P = TRADE_PRACTICE;
+const DARK = COUVERTURE_TEMPERING.dark;
 
 const RECIPES: Recipe[] = [
   {
@@ -603,6 +823,544 @@ const RECIPES: Recipe[] = [
     shelfLifeHours: 24,
     equipment: { name: 'Stand mixer (5 l)', batchCapacityG: 1500 },
   },
+  // ---- Added for the autumn and winter desserts.
+  {
+    id: 'rec-burnt-honey',
+    name: 'Burnt honey',
+    lines: [{ kind: 'ingredient', ingredientId: 'ing-honey', quantity: 500, unit: 'g' }],
+    // Most of the honey's 85 g of water boils off on the way to 160 °C (measured yield).
+    yieldG: 430,
+    steps: [
+      {
+        name: 'Cook the honey in a deep pan to a dark amber, 160 °C, swirling',
+        kind: 'caramel',
+        activeMinutes: 15,
+        waitMinutes: 0,
+        temperatureC: 160,
+      },
+      {
+        name: 'Pour into a heatproof jar; leave to cool, uncovered',
+        kind: 'rest',
+        activeMinutes: 2,
+        waitMinutes: 60,
+        temperatureC: 21,
+      },
+    ],
+    storage: 'dry',
+    shelfLifeHours: 30 * 24,
+    equipment: { name: 'Heavy saucepan (4 l)', batchCapacityG: 1500 },
+  },
+  {
+    id: 'rec-burnt-honey-ice-cream',
+    name: 'Burnt honey ice cream',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-whole-milk', quantity: 540, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-cream-36', quantity: 260, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-skim-milk-powder', quantity: 45, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-caster-sugar', quantity: 110, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-glucose-syrup', quantity: 60, unit: 'g' },
+      { kind: 'recipe', recipeId: 'rec-burnt-honey', quantity: 55, unit: 'g' },
+    ],
+    yieldG: 1060,
+    steps: [
+      {
+        name: 'Whisk the milk powder and sugar into the milk and cream; add the glucose syrup',
+        kind: 'prep',
+        activeMinutes: 8,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Heat to 83 °C for at least 15 s, whisking; melt the burnt honey in',
+        kind: 'cook',
+        activeMinutes: 15,
+        waitMinutes: 0,
+        temperatureC: 83,
+      },
+      {
+        name: 'Blend, strain and cool over an ice bath',
+        kind: 'cool',
+        activeMinutes: 10,
+        waitMinutes: 35,
+        temperatureC: 21,
+      },
+      {
+        name: 'Mature covered in the cold room overnight (at least 6 hours)',
+        kind: 'chill',
+        activeMinutes: 0,
+        waitMinutes: 12 * 60,
+        temperatureC: 4,
+      },
+      {
+        name: 'Churn in the batch freezer',
+        kind: 'churn',
+        activeMinutes: 20,
+        waitMinutes: 0,
+        temperatureC: -6,
+      },
+      {
+        name: 'Firm in the freezer before use',
+        kind: 'freeze',
+        activeMinutes: 0,
+        waitMinutes: P.churnedIceCreamFirmMinutes,
+        temperatureC: -20,
+      },
+    ],
+    storage: 'frozen',
+    shelfLifeHours: 7 * 24,
+    equipment: { name: 'Batch freezer (3 l)', batchCapacityG: 2400 },
+  },
+  {
+    id: 'rec-blackcurrant-leaf-sorbet',
+    name: 'Blackcurrant and blackcurrant-leaf sorbet',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-water', quantity: 330, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-caster-sugar', quantity: 150, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-dextrose', quantity: 40, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-glucose-syrup', quantity: 60, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-blackcurrant-leaves', quantity: 12, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-blackcurrants', quantity: 450, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-lemon-juice', quantity: 2, unit: 'cl' },
+    ],
+    // The strained-out leaves and a little evaporation: measured.
+    yieldG: 1035,
+    steps: [
+      {
+        name: 'Bring the water, sugar, dextrose and glucose syrup to the boil',
+        kind: 'cook',
+        activeMinutes: 8,
+        waitMinutes: 0,
+        temperatureC: 100,
+      },
+      {
+        name: 'Off the heat, infuse the blackcurrant leaves, covered',
+        kind: 'rest',
+        activeMinutes: 1,
+        waitMinutes: 20,
+      },
+      {
+        name: 'Strain out the leaves; blend the syrup with the blackcurrants and lemon; sieve',
+        kind: 'prep',
+        activeMinutes: 12,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Cool over an ice bath',
+        kind: 'cool',
+        activeMinutes: 5,
+        waitMinutes: 30,
+        temperatureC: 21,
+      },
+      {
+        name: 'Rest in the cold room',
+        kind: 'chill',
+        activeMinutes: 0,
+        waitMinutes: 4 * 60,
+        temperatureC: 4,
+      },
+      {
+        name: 'Churn in the batch freezer',
+        kind: 'churn',
+        activeMinutes: 18,
+        waitMinutes: 0,
+        temperatureC: -6,
+      },
+      {
+        name: 'Firm in the freezer before use',
+        kind: 'freeze',
+        activeMinutes: 0,
+        waitMinutes: P.churnedIceCreamFirmMinutes,
+        temperatureC: -20,
+      },
+    ],
+    storage: 'frozen',
+    shelfLifeHours: 5 * 24,
+    equipment: { name: 'Batch freezer (3 l)', batchCapacityG: 2400 },
+  },
+  {
+    id: 'rec-rye-crumble',
+    name: 'Brown-butter rye crumble',
+    lines: [
+      { kind: 'recipe', recipeId: 'rec-brown-butter', quantity: 110, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-rye-flour', quantity: 120, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-demerara', quantity: 90, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-sea-salt', quantity: 0.5, unit: 'metric_tsp' },
+    ],
+    yieldG: 305,
+    steps: [
+      {
+        name: 'Rub the cold brown butter into the rye flour, sugar and salt',
+        kind: 'prep',
+        activeMinutes: 8,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Chill the crumbs',
+        kind: 'chill',
+        activeMinutes: 0,
+        waitMinutes: 30,
+        temperatureC: 4,
+      },
+      {
+        name: `Bake at ${P.crumbleBake.temperatureC} °C about ${P.crumbleBake.minutes} minutes, stirring every ${P.crumbleBake.stirEveryMinutes} minutes`,
+        kind: 'bake',
+        activeMinutes: 4,
+        waitMinutes: P.crumbleBake.minutes,
+        temperatureC: P.crumbleBake.temperatureC,
+      },
+      { name: 'Cool on the tray; keep airtight', kind: 'rest', activeMinutes: 2, waitMinutes: 30 },
+    ],
+    storage: 'dry',
+    shelfLifeHours: 5 * 24,
+    equipment: { name: 'Oven tray (60 × 40)', batchCapacityG: 1500 },
+  },
+  {
+    id: 'rec-roasted-quince',
+    name: 'Slow-roasted quince',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-quince', quantity: 1, unit: 'kg' },
+      { kind: 'recipe', recipeId: 'rec-burnt-honey', quantity: 80, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-butter', quantity: 40, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-apple-brandy', quantity: 6, unit: 'cl' },
+      { kind: 'ingredient', ingredientId: 'ing-lemon-juice', quantity: 2, unit: 'cl' },
+      { kind: 'ingredient', ingredientId: 'ing-water', quantity: 150, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-vanilla-pod', quantity: 0.5, unit: 'piece' },
+    ],
+    // After peeling, coring and roasting down (measured).
+    yieldG: 820,
+    steps: [
+      {
+        name: 'Peel and core the quinces; cut into eighths',
+        kind: 'prep',
+        activeMinutes: 20,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Toss with burnt honey, butter, brandy, lemon, water and vanilla; roast covered at 150 °C',
+        kind: 'bake',
+        activeMinutes: 5,
+        waitMinutes: 120,
+        temperatureC: 150,
+      },
+      {
+        name: 'Uncover and glaze at 180 °C, basting twice',
+        kind: 'bake',
+        activeMinutes: 4,
+        waitMinutes: 20,
+        temperatureC: 180,
+      },
+      {
+        name: 'Cool in the syrup in a shallow tray',
+        kind: 'cool',
+        activeMinutes: 5,
+        waitMinutes: 60,
+        temperatureC: 21,
+      },
+      {
+        name: 'Chill covered',
+        kind: 'chill',
+        activeMinutes: 0,
+        waitMinutes: 90,
+        temperatureC: 4,
+      },
+    ],
+    storage: 'chilled',
+    shelfLifeHours: 4 * 24,
+    equipment: { name: 'Roasting tray (GN 1/1)', batchCapacityG: 3000 },
+  },
+  {
+    id: 'rec-dark-chocolate-bands',
+    name: 'Tempered dark chocolate bands',
+    lines: [{ kind: 'ingredient', ingredientId: 'ing-dark-chocolate', quantity: 600, unit: 'g' }],
+    yieldG: 540,
+    unitWeightG: 6,
+    steps: [
+      {
+        name: `Melt to ${DARK.meltC[0]}–${DARK.meltC[1]} °C`,
+        kind: 'temper',
+        activeMinutes: 5,
+        waitMinutes: 5,
+        temperatureC: DARK.meltC[1],
+      },
+      {
+        name: `Cool to ${DARK.coolC[0]} °C on the marble, working it`,
+        kind: 'temper',
+        activeMinutes: 8,
+        waitMinutes: 0,
+        temperatureC: DARK.coolC[0],
+      },
+      {
+        name: `Re-warm to ${DARK.workC[0]}–${DARK.workC[1]} °C; check a test strip sets glossy`,
+        kind: 'temper',
+        activeMinutes: 3,
+        waitMinutes: 0,
+        temperatureC: DARK.workC[0],
+      },
+      {
+        name: 'Spread on acetate strips, curl into bands inside ring moulds; set',
+        kind: 'rest',
+        activeMinutes: 15,
+        waitMinutes: 60,
+        temperatureC: 18,
+      },
+      {
+        name: 'Release the bands; store airtight, away from light',
+        kind: 'assemble',
+        activeMinutes: 5,
+        waitMinutes: 0,
+      },
+    ],
+    storage: 'dry',
+    shelfLifeHours: 21 * 24,
+    equipment: { name: 'Tempering bowl', batchCapacityG: 2000 },
+  },
+  {
+    id: 'rec-yogurt-mousse',
+    name: 'Yogurt mousse (fish gelatine)',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-fish-gelatin', quantity: 8, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-water', quantity: 40, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-greek-yogurt', quantity: 470, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-lemon-juice', quantity: 1, unit: 'cl' },
+      { kind: 'ingredient', ingredientId: 'ing-cream-36', quantity: 130, unit: 'g' },
+      { kind: 'recipe', recipeId: 'rec-italian-meringue', quantity: 120, unit: 'g' },
+    ],
+    yieldG: 770,
+    unitWeightG: 45,
+    steps: [
+      {
+        name: 'Bloom the gelatine in the cold water',
+        kind: 'prep',
+        activeMinutes: 2,
+        waitMinutes: 10,
+      },
+      {
+        name: 'Melt the gelatine with a quarter of the yogurt; stir into the rest with the lemon',
+        kind: 'cook',
+        activeMinutes: 6,
+        waitMinutes: 0,
+        temperatureC: 50,
+      },
+      { name: 'Whip the cream to soft peaks', kind: 'whip', activeMinutes: 5, waitMinutes: 0 },
+      {
+        name: 'Fold yogurt, meringue and cream; pipe into dome moulds',
+        kind: 'assemble',
+        activeMinutes: 15,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Set in the freezer, then unmould and keep frozen',
+        kind: 'freeze',
+        activeMinutes: 5,
+        waitMinutes: 4 * 60,
+        temperatureC: -20,
+      },
+    ],
+    storage: 'frozen',
+    shelfLifeHours: 10 * 24,
+    equipment: { name: 'Silicone dome moulds (30 × 45 g)', batchCapacityG: 1350 },
+  },
+  {
+    id: 'rec-sea-buckthorn-curd',
+    name: 'Sea-buckthorn curd',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-sea-buckthorn-juice', quantity: 200, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-caster-sugar', quantity: 150, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-whole-egg', quantity: 4, unit: 'piece' },
+      { kind: 'ingredient', ingredientId: 'ing-egg-yolk', quantity: 60, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-butter', quantity: 150, unit: 'g' },
+    ],
+    yieldG: 740,
+    steps: [
+      {
+        name: 'Whisk juice, sugar, eggs and yolks; cook over a bain-marie to 82 °C, stirring',
+        kind: 'custard',
+        activeMinutes: 15,
+        waitMinutes: 0,
+        temperatureC: 82,
+      },
+      {
+        name: 'Strain; blend in the cold butter in pieces at about 60 °C',
+        kind: 'prep',
+        activeMinutes: 6,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Cool in a shallow tray over ice, film on the surface',
+        kind: 'cool',
+        activeMinutes: 5,
+        waitMinutes: 40,
+        temperatureC: 21,
+      },
+      {
+        name: 'Set in the cold room',
+        kind: 'chill',
+        activeMinutes: 0,
+        waitMinutes: 4 * 60,
+        temperatureC: 4,
+      },
+    ],
+    storage: 'chilled',
+    shelfLifeHours: 4 * 24,
+    equipment: { name: 'Bain-marie bowl (3 l)', batchCapacityG: 2000 },
+  },
+  {
+    id: 'rec-buckwheat-brittle',
+    name: 'Buckwheat, pine-nut and sesame brittle',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-buckwheat-groats', quantity: 80, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-pine-nuts', quantity: 60, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-sesame-seeds', quantity: 40, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-caster-sugar', quantity: 200, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-glucose-syrup', quantity: 60, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-water', quantity: 50, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-butter', quantity: 40, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-sea-salt', quantity: 2, unit: 'g' },
+    ],
+    yieldG: 470,
+    unitWeightG: 5,
+    steps: [
+      {
+        name: 'Toast buckwheat, pine nuts and sesame at 160 °C; keep warm',
+        kind: 'bake',
+        activeMinutes: 3,
+        waitMinutes: 12,
+        temperatureC: 160,
+      },
+      {
+        name: 'Cook sugar, glucose syrup and water to a deep caramel, 170 °C',
+        kind: 'caramel',
+        activeMinutes: 12,
+        waitMinutes: 0,
+        temperatureC: 170,
+      },
+      {
+        name: 'Off the heat, stir in butter, salt and the warm seeds; spread thin between mats',
+        kind: 'prep',
+        activeMinutes: 5,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Leave to cool and harden',
+        kind: 'rest',
+        activeMinutes: 0,
+        waitMinutes: 30,
+        temperatureC: 21,
+      },
+      {
+        name: 'Break into shards; store airtight with a desiccant',
+        kind: 'assemble',
+        activeMinutes: 5,
+        waitMinutes: 0,
+      },
+    ],
+    storage: 'dry',
+    shelfLifeHours: 7 * 24,
+    equipment: { name: 'Heavy saucepan (3 l)', batchCapacityG: 1200 },
+  },
+  {
+    id: 'rec-fig-leaf-panna-cotta',
+    name: 'Fig-leaf panna cotta',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-cream-36', quantity: 500, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-whole-milk', quantity: 250, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-caster-sugar', quantity: 70, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-fig-leaves', quantity: 20, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-gelatin-leaves', quantity: 4, unit: 'leaf' },
+    ],
+    yieldG: 800,
+    unitWeightG: 80,
+    steps: [
+      {
+        name: 'Toast the fig leaves in a dry pan until fragrant; tear',
+        kind: 'prep',
+        activeMinutes: 5,
+        waitMinutes: 0,
+      },
+      {
+        name: 'Bring cream, milk and sugar to 85 °C; infuse the leaves off the heat, covered',
+        kind: 'cook',
+        activeMinutes: 8,
+        waitMinutes: 30,
+        temperatureC: 85,
+      },
+      {
+        name: 'Soak the gelatin leaves; strain the cream and melt the gelatin in it at 60 °C',
+        kind: 'cook',
+        activeMinutes: 6,
+        waitMinutes: 0,
+        temperatureC: 60,
+      },
+      {
+        name: 'Cool over an ice bath, stirring',
+        kind: 'cool',
+        activeMinutes: 5,
+        waitMinutes: 25,
+        temperatureC: 21,
+      },
+      {
+        name: 'Pour into moulds; set in the cold room',
+        kind: 'chill',
+        activeMinutes: 10,
+        waitMinutes: 4 * 60,
+        temperatureC: 4,
+      },
+    ],
+    storage: 'chilled',
+    shelfLifeHours: 3 * 24,
+    equipment: { name: 'Moulds (12 × 80 g)', batchCapacityG: 960 },
+  },
+  {
+    id: 'rec-smoked-tea-figs',
+    name: 'Smoked-tea roasted figs',
+    lines: [
+      { kind: 'ingredient', ingredientId: 'ing-water', quantity: 250, unit: 'ml' },
+      { kind: 'ingredient', ingredientId: 'ing-smoked-tea', quantity: 6, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-caster-sugar', quantity: 80, unit: 'g' },
+      { kind: 'ingredient', ingredientId: 'ing-lemon-juice', quantity: 1.5, unit: 'cl' },
+      { kind: 'ingredient', ingredientId: 'ing-figs', quantity: 600, unit: 'g' },
+    ],
+    yieldG: 760,
+    steps: [
+      {
+        name: 'Brew the tea at 90 °C for 4 minutes; strain',
+        kind: 'cook',
+        activeMinutes: 3,
+        waitMinutes: 4,
+        temperatureC: 90,
+      },
+      {
+        name: 'Dissolve the sugar in the tea with the lemon; reduce by a third',
+        kind: 'cook',
+        activeMinutes: 10,
+        waitMinutes: 0,
+        temperatureC: 104,
+      },
+      {
+        name: 'Halve the figs; roast cut side up in the syrup at 190 °C',
+        kind: 'bake',
+        activeMinutes: 6,
+        waitMinutes: 10,
+        temperatureC: 190,
+      },
+      {
+        name: 'Cool in the syrup in a shallow tray',
+        kind: 'cool',
+        activeMinutes: 3,
+        waitMinutes: 30,
+        temperatureC: 21,
+      },
+      {
+        name: 'Chill covered',
+        kind: 'chill',
+        activeMinutes: 0,
+        waitMinutes: 60,
+        temperatureC: 4,
+      },
+    ],
+    storage: 'chilled',
+    shelfLifeHours: 48,
+    equipment: { name: 'Roasting tray (GN 1/1)', batchCapacityG: 2000 },
+  },
 ];
 
 export const DEMO_RECIPES: Recipe[] = /* @__PURE__ */ RECIPES.map(withSafetyCautions);
@@ -649,6 +1407,66 @@ export const DEMO_DESSERTS: Dessert[] = [
     ],
     photos: [],
   },
+  {
+    id: 'des-quince-burnt-honey',
+    name: 'Quince and Burnt Honey',
+    description:
+      'Slow-roasted quince, burnt honey ice cream, brown-butter rye crumble and crème fraîche.',
+    components: [
+      { recipeId: 'rec-roasted-quince', quantity: 70, unit: 'g' },
+      { recipeId: 'rec-burnt-honey-ice-cream', quantity: 60, unit: 'g' },
+      { recipeId: 'rec-rye-crumble', quantity: 20, unit: 'g' },
+      { recipeId: 'rec-creme-fraiche-cream', quantity: 20, unit: 'g' },
+    ],
+    platingNotes:
+      'Warm the quince in its syrup to 40 °C; crumble as a line, quince across it, a rocher of ice cream on the crumble, a dot of cream, a spoon of syrup.',
+    photos: [],
+  },
+  {
+    id: 'des-blackcurrant-leaf',
+    name: 'Blackcurrant Leaf and Dark Chocolate',
+    description:
+      'Blackcurrant and blackcurrant-leaf sorbet, yogurt mousse, a dark chocolate band and hazelnut sponge.',
+    components: [
+      { recipeId: 'rec-blackcurrant-leaf-sorbet', quantity: 55, unit: 'g' },
+      { recipeId: 'rec-yogurt-mousse', quantity: 1, unit: 'piece' },
+      { recipeId: 'rec-dark-chocolate-bands', quantity: 1, unit: 'piece' },
+      { recipeId: 'rec-hazelnut-sponge', quantity: 25, unit: 'g' },
+    ],
+    platingNotes:
+      'Temper the mousse domes 40 minutes in the chiller; sponge disc inside the band, mousse on the sponge, sorbet quenelle beside it.',
+    photos: [],
+  },
+  {
+    id: 'des-sea-buckthorn',
+    name: 'Sea-Buckthorn and Toasted Buckwheat',
+    description:
+      'Sea-buckthorn curd under torched meringue, vanilla custard ice cream, buckwheat, pine-nut and sesame brittle.',
+    components: [
+      { recipeId: 'rec-sea-buckthorn-curd', quantity: 45, unit: 'g' },
+      { recipeId: 'rec-italian-meringue', quantity: 20, unit: 'g' },
+      { recipeId: 'rec-vanilla-base', quantity: 50, unit: 'g' },
+      { recipeId: 'rec-buckwheat-brittle', quantity: 2, unit: 'piece' },
+    ],
+    platingNotes:
+      'Curd in the well, meringue piped over half and torched, ice cream on a shard of brittle, a second shard standing.',
+    photos: [],
+  },
+  {
+    id: 'des-fig-leaf-smoked-tea',
+    name: 'Fig Leaf and Smoked Tea',
+    description:
+      'Fig-leaf panna cotta, figs roasted in smoked-tea syrup, almond crumble and buckwheat brittle.',
+    components: [
+      { recipeId: 'rec-fig-leaf-panna-cotta', quantity: 1, unit: 'piece' },
+      { recipeId: 'rec-smoked-tea-figs', quantity: 50, unit: 'g' },
+      { recipeId: 'rec-almond-crumble', quantity: 15, unit: 'g' },
+      { recipeId: 'rec-buckwheat-brittle', quantity: 1, unit: 'piece' },
+    ],
+    platingNotes:
+      'Unmould the panna cotta off-centre; fig halves against it, syrup spooned round, crumble at the side, brittle on top.',
+    photos: [],
+  },
 ];
 
 export const DEMO_MENUS: Menu[] = [
@@ -672,6 +1490,29 @@ export const DEMO_MENUS: Menu[] = [
     minGuests: 20,
     maxGuests: 120,
     leadDays: 6,
+    active: true,
+  },
+  {
+    id: 'menu-autumn-orchard',
+    name: 'Autumn Orchard',
+    description: 'Two plated desserts from the orchard and the hedgerow, for autumn dinners.',
+    dessertIds: ['des-fig-leaf-smoked-tea', 'des-quince-burnt-honey'],
+    pricePerGuestMinor: 1900,
+    minGuests: 10,
+    maxGuests: 80,
+    leadDays: 5,
+    active: true,
+  },
+  {
+    id: 'menu-winter-tasting',
+    name: 'Winter Tasting',
+    description:
+      'Three plated desserts in turn: sea-buckthorn, blackcurrant leaf, then quince and burnt honey.',
+    dessertIds: ['des-sea-buckthorn', 'des-blackcurrant-leaf', 'des-quince-burnt-honey'],
+    pricePerGuestMinor: 2600,
+    minGuests: 12,
+    maxGuests: 60,
+    leadDays: 7,
     active: true,
   },
 ];
