@@ -1,0 +1,36 @@
+// The few parts of autocannon 9 the benchmark uses (the package ships no types).
+declare module 'autocannon' {
+  export interface Options {
+    url: string;
+    connections?: number;
+    duration?: number;
+    amount?: number;
+    method?: string;
+    headers?: Record<string, string>;
+    body?: string;
+    requests?: Array<{
+      method?: string;
+      path?: string;
+      headers?: Record<string, string>;
+      body?: string;
+    }>;
+  }
+  export interface Histogram {
+    average: number;
+    p50: number;
+    p90: number;
+    p99: number;
+    max: number;
+    total: number;
+  }
+  export interface Result {
+    requests: Histogram;
+    latency: Histogram;
+    throughput: Histogram;
+    non2xx: number;
+    errors: number;
+    timeouts: number;
+    statusCodeStats: Record<string, { count: number }>;
+  }
+  export default function autocannon(options: Options): Promise<Result>;
+}
