@@ -963,6 +963,39 @@ describe('public menus (QUALITY.md: never costs or internal notes)', () => {
     });
   });
 
+  it('shows a menu change at once, though the public cards are cached between changes', async () => {
+    const menuBody = {
+      name: 'Praline supper',
+      description: 'One plated dessert.',
+      dessertIds: [ids.dessert],
+      pricePerGuestMinor: 950,
+      minGuests: 8,
+      maxGuests: 40,
+      leadDays: 3,
+      active: true,
+    };
+    const names = async () =>
+      ((await t.http.get('/api/menus').expect(200)).body as { items: { id: string }[] }).items.map(
+        (m) => m.id,
+      );
+    expect(await names()).toContain(ids.menu); // warms the cache
+    await t.http
+      .put(`/api/menus/${ids.menu}`)
+      .set(bearer(chef))
+      .send({ ...menuBody, active: false })
+      .expect(200);
+    expect(await names()).not.toContain(ids.menu);
+    await t.http.get(`/api/menus/${ids.menu}`).expect(404);
+    await t.http
+      .put(`/api/menus/${ids.menu}`)
+      .set(bearer(chef))
+      .send({ ...menuBody, pricePerGuestMinor: 1050 })
+      .expect(200);
+    const back = await t.http.get(`/api/menus/${ids.menu}`).expect(200);
+    expect(back.body.pricePerGuestMinor).toBe(1050);
+    await t.http.put(`/api/menus/${ids.menu}`).set(bearer(chef)).send(menuBody).expect(200);
+  });
+
   it('merges allergens over a menu’s desserts: contains wins over may contain', async () => {
     const sesameSeeds = await create(
       t,

@@ -128,11 +128,32 @@ export function computeView<T>(work: () => T): T {
 
 @Injectable()
 export class KitchenCatalogueService {
+  /**
+   * Goes up after every write through `transaction()`, so readers can cache what they derive
+   * from the catalogue (the public menu cards) and know when to throw it away. One process
+   * owns the SQLite file; several processes on PostgreSQL would need the revision in a table.
+   */
+  private generation = 0;
+
   constructor(private readonly dataSource: DataSource) {}
 
+  /** The catalogue's revision: read it BEFORE loading, tag what you derive with it. */
+  get revision(): number {
+    return this.generation;
+  }
+
+  /** For writers outside this service whose changes show in the catalogue (studio currency). */
+  invalidate(): void {
+    this.generation += 1;
+  }
+
   /** Runs `work` in one transaction (every multi-row write goes through here). */
-  transaction<T>(work: (manager: EntityManager) => Promise<T>): Promise<T> {
-    return this.dataSource.transaction(work);
+  async transaction<T>(work: (manager: EntityManager) => Promise<T>): Promise<T> {
+    try {
+      return await this.dataSource.transaction(work);
+    } finally {
+      this.generation += 1;
+    }
   }
 
   /**

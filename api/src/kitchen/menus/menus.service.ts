@@ -46,6 +46,8 @@ export type MenuCosting = MenuCost & {
 @Injectable()
 export class MenusService {
   private readonly logger = new Logger(MenusService.name);
+  /** The public cards of every active menu, sorted, for the catalogue revision they came from. */
+  private publicCache: { revision: number; cards: PublicMenu[] } | null = null;
 
   constructor(
     private readonly kitchen: KitchenCatalogueService,
@@ -77,14 +79,26 @@ export class MenusService {
     });
   }
 
-  /** Active menus only, by name, with what a guest needs to choose and nothing the kitchen keeps. */
-  async listPublic(query: KitchenListQuery): Promise<Page<PublicMenu>> {
+  /**
+   * Every active menu's public card. Rolling allergens up through every recipe is the costly
+   * part of the public read, so the cards are kept until the catalogue changes.
+   */
+  private async activeCards(): Promise<PublicMenu[]> {
+    const revision = this.kitchen.revision;
+    if (this.publicCache?.revision === revision) return this.publicCache.cards;
     const loaded = await this.kitchen.load();
-    const q = query.q?.trim().toLowerCase();
     const active = loaded.catalogue.menus
-      .filter((m) => m.active && (!q || m.name.toLowerCase().includes(q)))
+      .filter((m) => m.active)
       .sort((a, b) => a.name.localeCompare(b.name) || a.id.localeCompare(b.id));
     const cards = this.publicCards(loaded, active);
+    this.publicCache = { revision, cards };
+    return cards;
+  }
+
+  /** Active menus only, by name, with what a guest needs to choose and nothing the kitchen keeps. */
+  async listPublic(query: KitchenListQuery): Promise<Page<PublicMenu>> {
+    const q = query.q?.trim().toLowerCase();
+    const cards = (await this.activeCards()).filter((c) => !q || c.name.toLowerCase().includes(q));
     const start = (query.page - 1) * query.pageSize;
     return {
       items: cards.slice(start, start + query.pageSize),
@@ -95,9 +109,7 @@ export class MenusService {
   }
 
   async getPublic(id: string): Promise<PublicMenu> {
-    const loaded = await this.kitchen.load();
-    const menu = loaded.catalogue.menus.find((m) => m.id === id && m.active);
-    const [card] = menu ? this.publicCards(loaded, [menu]) : [];
+    const card = (await this.activeCards()).find((c) => c.id === id);
     if (!card) throw notFound('menu');
     return card;
   }
