@@ -83,6 +83,16 @@ describe('POST /api/auth/register', () => {
     expect(res.body.message.join(' ')).toMatch(/at least 12 characters/);
   });
 
+  it('refuses a common or guessable password with a readable message (OWASP ASVS 5.0 V6.2.4)', async () => {
+    for (const password of ['password1234', '123456789012']) {
+      const res = await t.http
+        .post('/api/auth/register')
+        .send({ name: 'Common', email: uniqueEmail('common'), password })
+        .expect(400);
+      expect(res.body.message).toEqual([expect.stringMatching(/too easy to guess/)]);
+    }
+  });
+
   it('refuses unknown or server-owned fields such as role (mass assignment, 400)', async () => {
     const res = await t.http
       .post('/api/auth/register')
@@ -99,7 +109,9 @@ describe('POST /api/auth/register', () => {
   });
 
   it('never truncates a password: the 72-byte prefix of an 80-byte password fails (QUALITY.md)', async () => {
-    const password = 'p'.repeat(80);
+    const password =
+      'a slow caramel, a quick quince, rye crumble & a spoon of burnt honey ice cream!!';
+    expect(Buffer.byteLength(password)).toBe(80);
     const email = uniqueEmail('long');
     await t.http.post('/api/auth/register').send({ name: 'Long', email, password }).expect(201);
     await t.http

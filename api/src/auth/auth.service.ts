@@ -1,5 +1,10 @@
 import { createHash, randomBytes, randomUUID, timingSafeEqual } from 'node:crypto';
-import { ConflictException, Injectable, UnauthorizedException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  Injectable,
+  UnauthorizedException,
+} from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Role, type AuthSession as AuthSessionBody } from '@nappe/shared';
@@ -11,6 +16,7 @@ import type { LoginDto } from './dto/login.dto.js';
 import type { RegisterDto } from './dto/register.dto.js';
 import { AuthSession } from './entities/auth-session.entity.js';
 import { PasswordService } from './password.service.js';
+import { isGuessablePassword, WEAK_PASSWORD_MESSAGE } from './password-strength.js';
 import type { AccessTokenClaims, Principal } from './principal.js';
 
 /** What a sign-in produces: the body for the client and the refresh token for the cookie. */
@@ -42,6 +48,9 @@ export class AuthService {
   ) {}
 
   async register(input: RegisterDto): Promise<IssuedSession> {
+    if (isGuessablePassword(input.password, { email: input.email, name: input.name })) {
+      throw new BadRequestException([WEAK_PASSWORD_MESSAGE]);
+    }
     // Hash before taking the connection: never hold the database during slow work.
     const passwordHash = await this.passwords.hash(input.password);
     const user = await this.dataSource.transaction(async (manager) => {
