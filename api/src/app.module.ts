@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { AuthModule } from './auth/auth.module.js';
+import { ClockModule } from './common/clock.js';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard.js';
 import { RolesGuard } from './auth/guards/roles.guard.js';
 import { AppThrottlerGuard } from './auth/guards/throttler.guard.js';
@@ -11,12 +12,14 @@ import { DatabaseModule } from './database/database.module.js';
 import { FilesModule } from './files/files.module.js';
 import { HealthController } from './health/health.controller.js';
 import { KitchenModule } from './kitchen/kitchen.module.js';
+import { OrdersModule } from './orders/orders.module.js';
 import { StudioModule } from './studio/studio.module.js';
 import { UsersModule } from './users/users.module.js';
 
 @Module({
   imports: [
     ConfigModule,
+    ClockModule,
     DatabaseModule,
     ThrottlerModule.forRootAsync({
       inject: [Env],
@@ -29,6 +32,7 @@ import { UsersModule } from './users/users.module.js';
     StudioModule,
     KitchenModule,
     FilesModule,
+    OrdersModule,
   ],
   controllers: [HealthController],
   providers: [

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { corsOrigins, DEV_JWT_SECRET, EnvError, validateEnv } from './env.js';
+import {
+  corsOrigins,
+  DEV_JWT_SECRET,
+  DEV_STRIPE_SECRET_KEY,
+  DEV_STRIPE_WEBHOOK_SECRET,
+  EnvError,
+  validateEnv,
+} from './env.js';
 
 describe('validateEnv', () => {
   it('runs the local demo on defaults', () => {
@@ -35,6 +42,25 @@ describe('validateEnv', () => {
     expect(() =>
       validateEnv({ NODE_ENV: 'production', JWT_SECRET: 'k'.repeat(40), COOKIE_SECURE: 'false' }),
     ).toThrow(/COOKIE_SECURE/);
+  });
+
+  it('refuses the local payment fake’s key and webhook secret in production', () => {
+    const base = { NODE_ENV: 'production', JWT_SECRET: 'k'.repeat(40) };
+    expect(() => validateEnv(base)).toThrow(/STRIPE_SECRET_KEY[\s\S]*STRIPE_WEBHOOK_SECRET/);
+    const live = validateEnv({
+      ...base,
+      STRIPE_SECRET_KEY: 'sk_live_example',
+      STRIPE_WEBHOOK_SECRET: 'whsec_example_live',
+    });
+    expect(live.STRIPE_API_HOST).toBeUndefined(); // the real service
+    expect(live.STRIPE_TIMEOUT_MS).toBe(10_000);
+    expect(validateEnv({})).toMatchObject({
+      STRIPE_SECRET_KEY: DEV_STRIPE_SECRET_KEY,
+      STRIPE_WEBHOOK_SECRET: DEV_STRIPE_WEBHOOK_SECRET,
+      OUTBOX_WORKER_ENABLED: true,
+    });
+    expect(validateEnv({ NODE_ENV: 'test' }).OUTBOX_WORKER_ENABLED).toBe(false);
+    expect(() => validateEnv({ STRIPE_API_PROTOCOL: 'ftp' })).toThrow(/STRIPE_API_PROTOCOL/);
   });
 
   it('never lets "null" into the CORS allow-list', () => {

@@ -14,6 +14,10 @@ import {
 /** The development-only signing secret. Production refuses to boot with it. */
 export const DEV_JWT_SECRET = 'nappe-local-development-secret-change-me-in-production';
 
+/** The local payment fake's test key and webhook secret. Production refuses both. */
+export const DEV_STRIPE_SECRET_KEY = 'sk_test_nappe_local';
+export const DEV_STRIPE_WEBHOOK_SECRET = 'whsec_nappe_local_demo';
+
 const toInt = ({ value }: { value: unknown }): unknown =>
   typeof value === 'string' && value.trim() !== '' ? Number(value) : value;
 const toBool = ({ value }: { value: unknown }): unknown =>
@@ -100,6 +104,89 @@ export class Env {
   @IsOptional()
   @IsString()
   PUBLIC_ADMIN_URL = 'http://localhost:5174';
+
+  // ---------------------------------------------------------------- payments
+
+  /** Secret API key of the payment service; the default is the local fake's test key. */
+  @IsString()
+  @MinLength(8)
+  STRIPE_SECRET_KEY = DEV_STRIPE_SECRET_KEY;
+
+  /** The webhook endpoint's signing secret (`whsec_…`); the default is the local fake's. */
+  @IsString()
+  @MinLength(8)
+  STRIPE_WEBHOOK_SECRET = DEV_STRIPE_WEBHOOK_SECRET;
+
+  /** Where the payment service is reached. Unset = the real service (api.stripe.com). */
+  @IsOptional()
+  @IsString()
+  @MinLength(1)
+  STRIPE_API_HOST?: string;
+
+  @IsOptional()
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  STRIPE_API_PORT?: number;
+
+  @IsOptional()
+  @IsIn(['http', 'https'])
+  STRIPE_API_PROTOCOL?: 'http' | 'https';
+
+  /**
+   * How long one call to the payment service may take, in ms. The API answers 503 when a call
+   * (with the SDK's two retries) has not finished shortly after this.
+   */
+  @Transform(toInt)
+  @IsInt()
+  @Min(200)
+  @Max(60_000)
+  STRIPE_TIMEOUT_MS = 10_000;
+
+  /** Unpaid bookings (open checkouts) one client may hold at once (QUALITY.md: abuse). */
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  @Max(50)
+  MAX_UNPAID_ORDERS_PER_CLIENT = 3;
+
+  // ---------------------------------------------------------------- mail
+
+  @IsString()
+  @MinLength(1)
+  SMTP_HOST = '127.0.0.1';
+
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  SMTP_PORT = 1025;
+
+  @IsOptional()
+  @IsString()
+  SMTP_USER?: string;
+
+  @IsOptional()
+  @IsString()
+  SMTP_PASS?: string;
+
+  /** The From header of every e-mail, e.g. `Atelier Ondine <bookings@example.com>`. */
+  @IsString()
+  @MinLength(3)
+  MAIL_FROM = 'Nappe bookings <bookings@nappe.test>';
+
+  /** Whether the outbox worker sends mail on a timer. Off by default in tests. */
+  @Transform(toBool)
+  @IsBoolean()
+  OUTBOX_WORKER_ENABLED = true;
+
+  /** How often the outbox worker looks for mail to send, in ms. */
+  @Transform(toInt)
+  @IsInt()
+  @Min(100)
+  @Max(3_600_000)
+  OUTBOX_INTERVAL_MS = 5000;
 }
 
 export class EnvError extends Error {
@@ -112,6 +199,10 @@ export class EnvError extends Error {
 /** Parses and checks the environment. Throws EnvError listing every problem at once. */
 export function validateEnv(raw: Record<string, unknown>): Env {
   const env = plainToInstance(Env, raw, { exposeDefaultValues: true });
+  // Tests drive the outbox by hand (`drainOutbox()`) unless they ask for the worker.
+  if (env.NODE_ENV === 'test' && raw.OUTBOX_WORKER_ENABLED === undefined) {
+    env.OUTBOX_WORKER_ENABLED = false;
+  }
   const problems = validateSync(env, { skipMissingProperties: false }).flatMap((error) =>
     Object.values(error.constraints ?? {}).map((m) => `${error.property}: ${m}`),
   );
@@ -122,6 +213,16 @@ export function validateEnv(raw: Record<string, unknown>): Env {
       );
     }
     if (!env.COOKIE_SECURE) problems.push('COOKIE_SECURE: must be true in production');
+    if (env.STRIPE_SECRET_KEY === DEV_STRIPE_SECRET_KEY) {
+      problems.push(
+        'STRIPE_SECRET_KEY: set the payment service key in production (the local test key is refused)',
+      );
+    }
+    if (env.STRIPE_WEBHOOK_SECRET === DEV_STRIPE_WEBHOOK_SECRET) {
+      problems.push(
+        'STRIPE_WEBHOOK_SECRET: set the webhook signing secret in production (the local one is refused)',
+      );
+    }
   }
   if (problems.length > 0) throw new EnvError(problems);
   return env;

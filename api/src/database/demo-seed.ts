@@ -3,6 +3,7 @@ import type { DataSource } from 'typeorm';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { seedDemoCatalogue } from './demo-catalogue-seed.js';
+import { seedDemoOrders } from './demo-orders-seed.js';
 
 /** The one password of every demo account; production refuses to seed them. */
 export const DEMO_PASSWORD = 'plated-demo-2026';
@@ -56,5 +57,7 @@ export async function seedDemo(
     }
   });
   await seedDemoCatalogue(dataSource); // renders its illustrations outside any transaction
+  const client = DEMO_ACCOUNTS.find((a) => a.role === Role.Client)!;
+  await seedDemoOrders(dataSource, client.email); // ledger rows marked seeded: no payment service
   return { seeded: true, accounts };
 }

@@ -1,7 +1,22 @@
 import { AuthSession } from '../auth/entities/auth-session.entity.js';
 import { kitchenEntities } from '../kitchen/entities/kitchen-entities.js';
+import { OutboxMessageEntity } from '../mail/entities/outbox-message.entity.js';
+import { OrderEventEntity } from '../orders/entities/order-event.entity.js';
+import { OrderGuestEntity } from '../orders/entities/order-guest.entity.js';
+import { OrderEntity } from '../orders/entities/order.entity.js';
+import { PaymentEntity } from '../payments/entities/payment.entity.js';
+import { ProcessedWebhookEventEntity } from '../payments/entities/processed-webhook-event.entity.js';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
 
+export const bookingEntities = [
+  OrderEntity,
+  OrderGuestEntity,
+  OrderEventEntity,
+  PaymentEntity,
+  ProcessedWebhookEventEntity,
+  OutboxMessageEntity,
+];
+
 /** Every entity, listed once for the app module, the CLI data source and the tests. */
-export const entities = [User, AuthSession, StudioSettings, ...kitchenEntities];
+export const entities = [User, AuthSession, StudioSettings, ...kitchenEntities, ...bookingEntities];

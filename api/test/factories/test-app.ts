@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DiscoveryModule } from '@nestjs/core';
-import { Test } from '@nestjs/testing';
+import { Test, type TestingModuleBuilder } from '@nestjs/testing';
 import * as argon2 from 'argon2';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
@@ -24,8 +24,16 @@ export interface TestApp {
   close: () => Promise<void>;
 }
 
+export interface TestAppOptions {
+  /** Replace providers before the module compiles (a clock, a mail transport). */
+  configure?: (builder: TestingModuleBuilder) => TestingModuleBuilder;
+}
+
 /** Boots the real AppModule on a fresh temporary SQLite file with the same middleware as main.ts. */
-export async function createTestApp(overrides: Record<string, string> = {}): Promise<TestApp> {
+export async function createTestApp(
+  overrides: Record<string, string> = {},
+  options: TestAppOptions = {},
+): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'nappe-e2e-'));
   const env = validateEnv({
     NODE_ENV: 'test',
@@ -33,10 +41,10 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
     DATABASE_PATH: join(dir, 'nappe.sqlite'),
     ...overrides,
   });
-  const moduleRef = await Test.createTestingModule({ imports: [AppModule, DiscoveryModule] })
+  const builder = Test.createTestingModule({ imports: [AppModule, DiscoveryModule] })
     .overrideProvider(Env)
-    .useValue(env)
-    .compile();
+    .useValue(env);
+  const moduleRef = await (options.configure ? options.configure(builder) : builder).compile();
   const app = moduleRef.createNestApplication<NestExpressApplication>({
     rawBody: true,
     bodyParser: false,

@@ -17,13 +17,21 @@ import type { OrderStatus } from './order-status.js';
  *   GET  /orders/:id                               owner client, chef, staff → OrderDetail (another client's → 404)
  *   POST /orders/:id/checkout                      owner    → CheckoutResponse      ({ plan: 'deposit' | 'full' | 'balance' | 'top_up' })
  *   POST /orders/:id/checkout/return               owner    → OrderDetail           ({ sessionId }) — the return from the payment page
- *   POST /orders/:id/cancellation-preview          owner    → CancellationPreview
- *   POST /orders/:id/cancel                        owner    → OrderDetail           (orderReasonSchema)
- *   POST /orders/:id/guest-change-preview          owner    → GuestChangePreview    (changeGuestCountSchema)
- *   PUT  /orders/:id/guests                        owner    → GuestChangeResult     (changeGuestCountSchema)
+ *   POST /orders/:id/cancellation-preview          owner, chef → CancellationPreview
+ *   POST /orders/:id/cancel                        owner, chef → OrderDetail        (orderReasonSchema)
+ *   POST /orders/:id/guest-change-preview          owner, chef → GuestChangePreview (changeGuestCountSchema)
+ *   PUT  /orders/:id/guests                        owner, chef → GuestChangeResult  (changeGuestCountSchema; the chef also after the deadline)
+ *   POST /orders/:id/confirm                       chef     → OrderDetail           (orderReasonSchema) requested → confirmed
+ *   POST /orders/:id/decline                       chef     → OrderDetail           (orderReasonSchema) requested → declined, full refund
+ *   POST /orders/:id/complete                      chef     → OrderDetail           (orderReasonSchema) confirmed → completed
  *   GET  /orders/:id/receipts/:paymentId.pdf       owner, chef → application/pdf
  *   GET  /orders/:id/event.ics                     owner, chef, staff → text/calendar
  *   POST /payments/webhook                         public (signature on the raw body)
+ *
+ * Errors: Nest's shape `{ statusCode, message, error }`; rule errors add `code` (booking-errors.ts).
+ * 400 bad input, 404 not found (or another client's), 409 refused by the order's state or the
+ * calendar, 429 too many unpaid bookings, 502 the payment service refused, 503 it did not answer
+ * (nothing changed; try again).
  */
 
 export interface AvailabilityDay {

@@ -1,5 +1,12 @@
 import { InitialSchema1764633600000 } from './1764633600000-initial-schema.js';
 import { KitchenCatalogue1764720000000 } from './1764720000000-kitchen-catalogue.js';
+import { BookingSettings1764806400000 } from './1764806400000-booking-settings.js';
+import { OrdersAndPayments1764892800000 } from './1764892800000-orders-and-payments.js';
 
 /** Every migration, in order. Listed as classes (a glob does not work with ESM builds). */
-export const migrations = [InitialSchema1764633600000, KitchenCatalogue1764720000000];
+export const migrations = [
+  InitialSchema1764633600000,
+  KitchenCatalogue1764720000000,
+  BookingSettings1764806400000,
+  OrdersAndPayments1764892800000,
+];

@@ -95,10 +95,14 @@ export async function pageByName<E extends ObjectLiteral>(
  */
 export function rethrowForeignKey(error: unknown, message: string): never {
   const code = (error as QueryFailedError & { driverError?: { code?: string } }).driverError?.code;
-  // SQLite's code, and PostgreSQL's foreign_key_violation (23503).
+  // SQLite's codes (ON DELETE RESTRICT is enforced as a trigger and reports
+  // SQLITE_CONSTRAINT_TRIGGER with "FOREIGN KEY constraint failed"), and PostgreSQL's
+  // foreign_key_violation (23503).
+  const sqliteRestrict =
+    code === 'SQLITE_CONSTRAINT_TRIGGER' && /FOREIGN KEY/i.test((error as Error).message);
   if (
     error instanceof QueryFailedError &&
-    (code === 'SQLITE_CONSTRAINT_FOREIGNKEY' || code === '23503')
+    (code === 'SQLITE_CONSTRAINT_FOREIGNKEY' || sqliteRestrict || code === '23503')
   ) {
     throw new ConflictException({ statusCode: 409, message, error: 'Conflict' });
   }
