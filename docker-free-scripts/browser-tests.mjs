@@ -6,6 +6,7 @@ import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import {
+  assertPortsFree,
   buildAll,
   migrateAndSeed,
   ROOT,
@@ -32,6 +33,7 @@ const testEnv = {
 };
 const config = systemConfig({ ...process.env, ...testEnv });
 
+await assertPortsFree(Object.values(config.ports));
 if (process.env.NAPPE_SKIP_BUILD !== '1') buildAll();
 migrateAndSeed(config);
 const system = startSystem(config, {

@@ -2,6 +2,7 @@
 // Ctrl-C stops every process.
 import { performance } from 'node:perf_hooks';
 import {
+  assertPortsFree,
   buildAll,
   DEMO_ACCOUNTS,
   DEMO_PASSWORD,
@@ -13,6 +14,15 @@ import {
 
 const started = performance.now();
 const config = systemConfig();
+try {
+  await assertPortsFree(Object.values(config.ports));
+} catch (error) {
+  console.error(error instanceof Error ? error.message : error);
+  console.error(
+    'Is the demo already running? Stop it with Ctrl-C, or move ports with NAPPE_*_PORT.',
+  );
+  process.exit(1);
+}
 
 if (process.env.NAPPE_SKIP_BUILD !== '1') {
   console.log('Building shared, api, storefront and admin…');

@@ -2,6 +2,7 @@
 //   1. lint and type-check every workspace
 //   2. unit tests of every workspace, and the API's e2e tests (supertest on a temporary SQLite file)
 //   3. the browser suite in Chromium against the running system
+//   4. the durability drill: SIGKILL the API under bookings, five times; nothing acknowledged lost
 // Set NAPPE_SKIP_BROWSER=1 to leave out step 3 while developing (CI never does).
 import { spawnSync } from 'node:child_process';
 import { performance } from 'node:perf_hooks';
@@ -12,8 +13,14 @@ const steps = [
   ['typecheck', ['npm', 'run', 'typecheck', '--silent']],
   ['unit and API tests', ['npm', 'run', 'test', '--workspaces', '--if-present', '--silent']],
 ];
-if (process.env.NAPPE_SKIP_BROWSER !== '1')
+if (process.env.NAPPE_SKIP_BROWSER !== '1') {
   steps.push(['browser tests', ['node', 'docker-free-scripts/browser-tests.mjs']]);
+  // Runs on the API build the browser step just made.
+  steps.push([
+    'durability drill (SIGKILL under writes)',
+    ['node', 'docker-free-scripts/crash-drill.mjs'],
+  ]);
+}
 
 const timings = [];
 for (const [name, [command, ...args]] of steps) {

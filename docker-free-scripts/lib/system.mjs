@@ -2,6 +2,7 @@
 // served by `vite preview`), the mail inbox (maildev) and the payment fake. Used by `npm run demo`
 // and by the browser tests, so both run exactly the same processes.
 import { spawnSync } from 'node:child_process';
+import { createServer } from 'node:net';
 import { existsSync, mkdirSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -197,5 +198,22 @@ export async function waitUntilReady(config, timeoutMs = 90_000) {
     if (Date.now() > deadline)
       throw new Error(`Not ready after ${timeoutMs / 1000} s: ${[...pending].join(', ')}`);
     await new Promise((r) => setTimeout(r, 300));
+  }
+}
+
+/**
+ * Fails when something already listens on one of `ports`, so a test never talks to another
+ * process's server by mistake.
+ * @param {number[]} ports
+ */
+export async function assertPortsFree(ports) {
+  for (const port of ports) {
+    await new Promise((resolve, reject) => {
+      const probe = createServer();
+      probe.once('error', () =>
+        reject(new Error(`Port ${port} is already in use; stop what runs there first.`)),
+      );
+      probe.listen(port, '127.0.0.1', () => probe.close(() => resolve(undefined)));
+    });
   }
 }
