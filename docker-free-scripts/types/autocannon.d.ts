@@ -8,11 +8,14 @@ declare module 'autocannon' {
     method?: string;
     headers?: Record<string, string>;
     body?: string;
+    timeout?: number;
     requests?: Array<{
       method?: string;
       path?: string;
       headers?: Record<string, string>;
       body?: string;
+      setupRequest?: (request: Record<string, unknown>, context: Record<string, unknown>) => unknown;
+      onResponse?: (status: number, body: string, context: Record<string, unknown>) => void;
     }>;
   }
   export interface Histogram {
@@ -31,6 +34,14 @@ declare module 'autocannon' {
     errors: number;
     timeouts: number;
     statusCodeStats: Record<string, { count: number }>;
+    '1xx': number;
+    '2xx': number;
+    '3xx': number;
+    '4xx': number;
+    '5xx': number;
   }
-  export default function autocannon(options: Options): Promise<Result>;
+  export interface Instance extends PromiseLike<Result> {
+    stop(): void;
+  }
+  export default function autocannon(options: Options): Instance;
 }
