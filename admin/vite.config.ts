@@ -19,5 +19,8 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}'],
     setupFiles: ['./src/testing/setup.ts'],
     css: false,
+    // Whole-route tests of the kitchen editors type into long forms; on a busy 2-core machine
+    // one can take well over vitest's default 5 s.
+    testTimeout: 30_000,
   },
 });

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router';
+import { createBrowserRouter, redirect, RouterProvider, type RouteObject } from 'react-router';
 import { PageLoader } from '../components/ui/page-loader';
 import { paths } from '../config/paths';
 import { guestOnlyLoader, requireTeamMemberLoader } from './guards';
@@ -41,6 +41,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                 return { Component: TeamRoute, loader: teamLoader(queryClient) };
               },
             },
+            ...kitchenRoutes(queryClient),
             {
               path: '*',
               lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
@@ -48,6 +49,104 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           ],
         },
       ],
+    },
+  ];
+}
+
+/** Kitchen: Ingredients, Recipes, Desserts, Menus — each screen its own chunk. */
+function kitchenRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    { path: 'kitchen', loader: () => redirect(paths.ingredients.getHref()) },
+    {
+      path: paths.ingredients.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/ingredients');
+        return { Component: m.IngredientsRoute, loader: m.ingredientsLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.newIngredient.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/ingredient');
+        return { Component: m.IngredientRoute, loader: m.ingredientLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.ingredient.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/ingredient');
+        return { Component: m.IngredientRoute, loader: m.ingredientLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.recipes.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/recipes');
+        return { Component: m.RecipesRoute, loader: m.recipesLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.newRecipe.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/recipe');
+        return { Component: m.RecipeRoute, loader: m.recipeLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.recipe.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/recipe');
+        return { Component: m.RecipeRoute, loader: m.recipeLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.recipeScale.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/recipe-scale');
+        return { Component: m.RecipeScaleRoute, loader: m.recipeScaleLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.desserts.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/desserts');
+        return { Component: m.DessertsRoute, loader: m.dessertsLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.newDessert.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/dessert');
+        return { Component: m.DessertRoute, loader: m.dessertLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.dessert.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/dessert');
+        return { Component: m.DessertRoute, loader: m.dessertLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.menus.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/menus');
+        return { Component: m.MenusRoute, loader: m.menusLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.newMenu.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/menu');
+        return { Component: m.MenuRoute, loader: m.menuLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.menu.path,
+      lazy: async () => {
+        const m = await import('./routes/kitchen/menu');
+        return { Component: m.MenuRoute, loader: m.menuLoader(queryClient) };
+      },
     },
   ];
 }

@@ -5,6 +5,42 @@ export const paths = {
     path: '/studio/team',
     getHref: (page?: number) => (page && page > 1 ? `/studio/team?page=${page}` : '/studio/team'),
   },
+  ingredients: { path: '/kitchen/ingredients', getHref: () => '/kitchen/ingredients' },
+  newIngredient: { path: '/kitchen/ingredients/new', getHref: () => '/kitchen/ingredients/new' },
+  ingredient: {
+    path: '/kitchen/ingredients/:id',
+    getHref: (id: string) => `/kitchen/ingredients/${encodeURIComponent(id)}`,
+  },
+  recipes: { path: '/kitchen/recipes', getHref: () => '/kitchen/recipes' },
+  newRecipe: { path: '/kitchen/recipes/new', getHref: () => '/kitchen/recipes/new' },
+  recipe: {
+    path: '/kitchen/recipes/:id',
+    getHref: (id: string) => `/kitchen/recipes/${encodeURIComponent(id)}`,
+  },
+  recipeScale: {
+    path: '/kitchen/recipes/:id/scale',
+    getHref: (id: string, query?: { grams: number } | { plates: number; dessertId: string }) => {
+      const base = `/kitchen/recipes/${encodeURIComponent(id)}/scale`;
+      if (!query) return base;
+      const params =
+        'grams' in query
+          ? new URLSearchParams({ grams: String(query.grams) })
+          : new URLSearchParams({ plates: String(query.plates), dessertId: query.dessertId });
+      return `${base}?${params}`;
+    },
+  },
+  desserts: { path: '/kitchen/desserts', getHref: () => '/kitchen/desserts' },
+  newDessert: { path: '/kitchen/desserts/new', getHref: () => '/kitchen/desserts/new' },
+  dessert: {
+    path: '/kitchen/desserts/:id',
+    getHref: (id: string) => `/kitchen/desserts/${encodeURIComponent(id)}`,
+  },
+  menus: { path: '/kitchen/menus', getHref: () => '/kitchen/menus' },
+  newMenu: { path: '/kitchen/menus/new', getHref: () => '/kitchen/menus/new' },
+  menu: {
+    path: '/kitchen/menus/:id',
+    getHref: (id: string) => `/kitchen/menus/${encodeURIComponent(id)}`,
+  },
   signIn: {
     path: '/sign-in',
     getHref: (redirectTo?: string | null) => {

@@ -36,6 +36,12 @@ export interface ApiClientOptions {
   fetch?: typeof fetch;
 }
 
+export interface UploadOptions {
+  /** Told as the body goes out: bytes sent so far and the total. */
+  onProgress?: (loaded: number, total: number) => void;
+  signal?: AbortSignal;
+}
+
 /**
  * The one way the app talks to the API. The access token lives in memory only (never in
  * storage); the refresh token is an HttpOnly cookie the browser sends to /api/auth. A 401
@@ -124,12 +130,66 @@ export function createApiClient(options: ApiClientOptions = {}) {
     return (text ? JSON.parse(text) : undefined) as T;
   }
 
+  /**
+   * A multipart upload through XMLHttpRequest, the one browser API that reports upload
+   * progress. Same token rules as `request`: one refresh and one retry on a 401.
+   */
+  function sendUpload(
+    path: string,
+    form: FormData,
+    token: string | null,
+    opts: UploadOptions,
+  ): Promise<{ status: number; text: string; retryAfter: string | null }> {
+    return new Promise((resolve, reject) => {
+      const xhr = new XMLHttpRequest();
+      xhr.open('POST', url(path));
+      xhr.withCredentials = true;
+      xhr.setRequestHeader('Accept', 'application/json');
+      if (token) xhr.setRequestHeader('Authorization', `Bearer ${token}`);
+      xhr.upload.onprogress = (event) => {
+        if (event.lengthComputable) opts.onProgress?.(event.loaded, event.total);
+      };
+      xhr.onload = () =>
+        resolve({
+          status: xhr.status,
+          text: xhr.responseText,
+          retryAfter: xhr.getResponseHeader('Retry-After'),
+        });
+      xhr.onerror = () => reject(new ApiError(0, [NETWORK_ERROR_MESSAGE]));
+      xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
+      opts.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+      xhr.send(form);
+    });
+  }
+
+  async function upload<T>(path: string, form: FormData, opts: UploadOptions = {}): Promise<T> {
+    const tokenSent = accessToken;
+    let res = await sendUpload(path, form, tokenSent, opts);
+    if (res.status === 401) {
+      const newer = accessToken !== null && accessToken !== tokenSent ? accessToken : null;
+      const token = newer ?? (await refreshSession())?.accessToken ?? null;
+      if (token !== null) {
+        res = await sendUpload(path, form, token, opts);
+        if (res.status === 401) clearSession();
+      }
+    }
+    if (res.status < 200 || res.status >= 300) {
+      throw errorFromBody(res.status, res.text, res.retryAfter);
+    }
+    return (res.text ? JSON.parse(res.text) : undefined) as T;
+  }
+
   return {
     request,
     get: <T>(path: string, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
       request<T>(path, { ...opts, method: 'GET' }),
     post: <T>(path: string, body?: unknown, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
       request<T>(path, { ...opts, method: 'POST', body }),
+    put: <T>(path: string, body?: unknown, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
+      request<T>(path, { ...opts, method: 'PUT', body }),
+    delete: <T = void>(path: string, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
+      request<T>(path, { ...opts, method: 'DELETE' }),
+    upload,
     refreshSession,
     /** On app start: trade the refresh cookie, if any, for a session. Null when signed out. */
     restoreSession: (): Promise<AuthSession | null> => refreshSession(),
@@ -147,19 +207,31 @@ export function createApiClient(options: ApiClientOptions = {}) {
 export type ApiClient = ReturnType<typeof createApiClient>;
 
 async function toApiError(res: Response): Promise<ApiError> {
+  let text = '';
+  try {
+    text = await res.text();
+  } catch {
+    // No body to read: the generic message below will do.
+  }
+  return errorFromBody(res.status, text, res.headers.get('Retry-After'));
+}
+
+function errorFromBody(status: number, text: string, retryAfter: string | null): ApiError {
   let messages: string[] = [];
   try {
-    const body = (await res.json()) as Partial<ApiErrorBody>;
+    const body = JSON.parse(text) as Partial<ApiErrorBody>;
     if (Array.isArray(body.message)) messages = body.message.map(String);
     else if (typeof body.message === 'string') messages = [body.message];
   } catch {
     // Not JSON (a proxy error page, an empty body): fall back to a generic message below.
   }
-  if (messages.length === 0) messages = [fallbackMessage(res.status)];
-  return new ApiError(res.status, messages, parseRetryAfter(res.headers.get('Retry-After')));
+  if (messages.length === 0) messages = [fallbackMessage(status)];
+  return new ApiError(status, messages, parseRetryAfter(retryAfter));
 }
 
 function fallbackMessage(status: number): string {
+  if (status === 413) return 'The file is too large for the server. Send a smaller one.';
+  if (status === 415) return 'The server does not accept this kind of file.';
   if (status === 429) return 'Too many attempts. Please wait a little and try again.';
   if (status >= 500) return 'Something went wrong on our side. Please try again in a moment.';
   return `The request failed (${status}).`;

@@ -30,3 +30,15 @@ if (!window.matchMedia) {
     }) as MediaQueryList;
 }
 window.scrollTo = (() => {}) as typeof window.scrollTo;
+
+// Ark UI's combobox scrolls the highlighted option into view and observes sizes.
+Element.prototype.scrollIntoView ??= function scrollIntoView() {};
+globalThis.ResizeObserver ??= class {
+  observe() {}
+  unobserve() {}
+  disconnect() {}
+} as unknown as typeof ResizeObserver;
+
+// jsdom has no object URLs; the photo preview only needs a string.
+URL.createObjectURL ??= () => 'blob:nappe-test-preview';
+URL.revokeObjectURL ??= () => {};

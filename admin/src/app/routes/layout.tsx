@@ -106,7 +106,7 @@ function NavItem({
       _hover={{ color: 'fg', bg: 'bg.emphasized', textDecoration: 'none' }}
       _currentPage={{ color: 'fg', bg: 'accent.subtle' }}
     >
-      <NavLink to={to} end onClick={onNavigate}>
+      <NavLink to={to} end={to === paths.today.getHref()} onClick={onNavigate}>
         {label}
       </NavLink>
     </Link>

@@ -22,7 +22,16 @@ export const NAV_SECTIONS: readonly NavSection[] = [
   { label: 'Today', roles: ALL_TEAM, to: paths.today.getHref() },
   { label: 'Orders', roles: CHEF },
   { label: 'Calendar', roles: CHEF },
-  { label: 'Kitchen', roles: ALL_TEAM },
+  {
+    label: 'Kitchen',
+    roles: ALL_TEAM,
+    children: [
+      { label: 'Ingredients', to: paths.ingredients.getHref() },
+      { label: 'Recipes', to: paths.recipes.getHref() },
+      { label: 'Desserts', to: paths.desserts.getHref() },
+      { label: 'Menus', to: paths.menus.getHref() },
+    ],
+  },
   { label: 'Prep', roles: ALL_TEAM },
   { label: 'Allergy notes', roles: ALL_TEAM },
   { label: 'Studio', roles: CHEF, children: [{ label: 'Team', to: paths.team.getHref() }] },

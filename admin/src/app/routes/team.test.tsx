@@ -99,14 +99,30 @@ describe('Studio → Team', () => {
     expect(nav.queryByText('Studio')).not.toBeInTheDocument();
   });
 
-  it('shows the chef Today and Studio → Team, and nothing that is not built yet', async () => {
+  it('shows the chef Today, Kitchen and Studio → Team, and nothing that is not built yet', async () => {
     signedInAs(chefUser);
     const { user } = renderApp('/');
     const nav = await openMenu(user);
     expect(nav.getByRole('link', { name: 'Today' })).toHaveAttribute('aria-current', 'page');
     expect(nav.getByText('Studio')).toBeInTheDocument();
     expect(nav.getByRole('link', { name: 'Team' })).toHaveAttribute('href', '/studio/team');
-    expect(nav.getAllByRole('link')).toHaveLength(2);
+    expect(nav.getByText('Kitchen')).toBeInTheDocument();
+    expect(nav.getAllByRole('link').map((a) => a.getAttribute('href'))).toEqual([
+      '/',
+      '/kitchen/ingredients',
+      '/kitchen/recipes',
+      '/kitchen/desserts',
+      '/kitchen/menus',
+      '/studio/team',
+    ]);
+  });
+
+  it('shows staff the Kitchen section too (read-only screens)', async () => {
+    signedInAs(staffUser);
+    const { user } = renderApp('/');
+    const nav = await openMenu(user);
+    expect(nav.getByRole('link', { name: 'Recipes' })).toHaveAttribute('href', '/kitchen/recipes');
+    expect(nav.getAllByRole('link')).toHaveLength(5);
   });
 });
 

@@ -117,3 +117,84 @@ export const InboxIcon = /* @__PURE__ */ createIcon({
     <path key="b" {...stroke} d="M3.5 13.5h5l1 2h5l1-2h5" />,
   ],
 });
+
+export const PlusIcon = /* @__PURE__ */ createIcon({
+  displayName: 'PlusIcon',
+  path: <path {...stroke} d="M12 5v14M5 12h14" />,
+});
+
+export const TrashIcon = /* @__PURE__ */ createIcon({
+  displayName: 'TrashIcon',
+  path: [
+    <path key="a" {...stroke} d="M4.5 7h15M9.5 7V4.5h5V7" />,
+    <path key="b" {...stroke} d="M6.5 7l1 13h9l1-13M10 11v5.5M14 11v5.5" />,
+  ],
+});
+
+export const ArrowUpIcon = /* @__PURE__ */ createIcon({
+  displayName: 'ArrowUpIcon',
+  path: <path {...stroke} d="M12 19V5M6.5 10.5 12 5l5.5 5.5" />,
+});
+
+export const ArrowDownIcon = /* @__PURE__ */ createIcon({
+  displayName: 'ArrowDownIcon',
+  path: <path {...stroke} d="M12 5v14M6.5 13.5 12 19l5.5-5.5" />,
+});
+
+export const SearchIcon = /* @__PURE__ */ createIcon({
+  displayName: 'SearchIcon',
+  path: [
+    <circle key="a" {...stroke} cx="10.5" cy="10.5" r="6" />,
+    <path key="b" {...stroke} d="M15 15l5 5" />,
+  ],
+});
+
+/** Two stacked chevrons: a column that can be sorted either way. */
+export const SortIcon = /* @__PURE__ */ createIcon({
+  displayName: 'SortIcon',
+  path: <path {...stroke} d="M8 10l4-4 4 4M8 14l4 4 4-4" />,
+});
+
+/** A hand scale: the Scale view of a recipe. */
+export const ScaleIcon = /* @__PURE__ */ createIcon({
+  displayName: 'ScaleIcon',
+  path: [
+    <path key="a" {...stroke} d="M12 4v16M7 20h10M5 7h14" />,
+    <path key="b" {...stroke} d="M5 7l-2.5 6a2.5 2.5 0 0 0 5 0zM19 7l-2.5 6a2.5 2.5 0 0 0 5 0z" />,
+  ],
+});
+
+export const UploadIcon = /* @__PURE__ */ createIcon({
+  displayName: 'UploadIcon',
+  path: [
+    <path key="a" {...stroke} d="M12 15.5V4M7 8.5 12 4l5 4.5" />,
+    <path key="b" {...stroke} d="M4.5 14.5v5h15v-5" />,
+  ],
+});
+
+/** A dotted ring: "may contain" (a trace), beside the triangle used for "contains". */
+export const TraceIcon = /* @__PURE__ */ createIcon({
+  displayName: 'TraceIcon',
+  path: [
+    <circle key="a" {...stroke} cx="12" cy="12" r="7.5" strokeDasharray="2 3" />,
+    <circle key="b" fill="currentColor" cx="12" cy="12" r="1.75" />,
+  ],
+});
+
+/** A flame over a line: a step that can hurt (hot sugar, custard, cooling, freezing). */
+export const CautionIcon = /* @__PURE__ */ createIcon({
+  displayName: 'CautionIcon',
+  path: [
+    <path
+      key="a"
+      {...stroke}
+      d="M12 3.5c.5 3-3.5 5-3.5 9a3.5 3.5 0 0 0 7 0c0-1.6-.7-2.7-1.5-3.6-.2 1.4-.9 2.1-1.6 2.1.6-2.7-.1-5.4-.4-7.5Z"
+    />,
+    <path key="b" {...stroke} d="M6 20.5h12" />,
+  ],
+});
+
+export const ChevronDownIcon = /* @__PURE__ */ createIcon({
+  displayName: 'ChevronDownIcon',
+  path: <path {...stroke} d="M6 9.5l6 6 6-6" />,
+});
