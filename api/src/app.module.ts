@@ -1,7 +1,10 @@
 import { Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { ThrottlerModule } from '@nestjs/throttler';
+import { AllergyNotesModule } from './allergy-notes/allergy-notes.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { ShutdownState } from './common/shutdown.js';
+import { PrepModule } from './prep/prep.module.js';
 import { ClockModule } from './common/clock.js';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard.js';
 import { RolesGuard } from './auth/guards/roles.guard.js';
@@ -15,6 +18,7 @@ import { KitchenModule } from './kitchen/kitchen.module.js';
 import { OrdersModule } from './orders/orders.module.js';
 import { StudioModule } from './studio/studio.module.js';
 import { UsersModule } from './users/users.module.js';
+import { InsightsModule } from './insights/insights.module.js';
 
 @Module({
   imports: [
@@ -33,9 +37,13 @@ import { UsersModule } from './users/users.module.js';
     KitchenModule,
     FilesModule,
     OrdersModule,
+    InsightsModule,
+    AllergyNotesModule,
+    PrepModule,
   ],
   controllers: [HealthController],
   providers: [
+    ShutdownState,
     // Order matters: throttle first, then authenticate, then authorise.
     { provide: APP_GUARD, useClass: AppThrottlerGuard },
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -10,6 +10,7 @@ import cookieParser from 'cookie-parser';
 import type { NextFunction, Request, Response } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
+import { ShutdownState } from './common/shutdown.js';
 import { corsOrigins, type Env } from './config/env.js';
 
 /** Largest JSON body we accept (guest lists included); larger → 413. */
@@ -26,6 +27,7 @@ const MULTIPART_ROUTES = [/^\/api\/(desserts|menus)\/[^/]+\/photo$/];
  * the same middleware in the same order.
  */
 export function configureApp(app: NestExpressApplication, env: Env): INestApplication {
+  app.use(app.get(ShutdownState).middleware);
   app.setGlobalPrefix('api');
   app.set('trust proxy', false);
   // "simple" query parsing: no nested objects from `?a[b]=…`; a repeated parameter becomes an

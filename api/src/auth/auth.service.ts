@@ -8,7 +8,7 @@ import {
 import { JwtService } from '@nestjs/jwt';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Role, type AuthSession as AuthSessionBody } from '@nappe/shared';
-import { DataSource, Repository } from 'typeorm';
+import { DataSource, IsNull, Repository, type EntityManager } from 'typeorm';
 import { Env } from '../config/env.js';
 import { User } from '../users/entities/user.entity.js';
 import { toAuthUser } from '../users/user.mapper.js';
@@ -72,7 +72,8 @@ export class AuthService {
   async login(input: LoginDto): Promise<IssuedSession> {
     const user = await this.users.findOne({ where: { email: input.email } });
     const ok = await this.passwords.verify(user?.passwordHash, input.password);
-    if (!user || !ok) throw new UnauthorizedException('Wrong e-mail or password.');
+    if (!user || !ok || user.removedAt)
+      throw new UnauthorizedException('Wrong e-mail or password.');
     return this.openSession(user);
   }
 
@@ -90,7 +91,8 @@ export class AuthService {
         where: { id: sessionId },
         relations: { user: true },
       });
-      if (!session || !session.user || session.revokedAt || session.expiresAt <= now) return null;
+      if (!session?.user || session.user.removedAt || session.revokedAt || session.expiresAt <= now)
+        return null;
       if (!sameHash(presented, session.refreshHash)) {
         if (sameHash(presented, session.previousRefreshHash)) {
           const withinGrace = now.getTime() - session.lastUsedAt.getTime() < REUSE_GRACE_MS;
@@ -128,8 +130,33 @@ export class AuthService {
       where: { id: claims.sid, userId: claims.sub },
       relations: { user: true },
     });
-    if (!session?.user || session.revokedAt || session.expiresAt <= new Date()) return null;
+    if (
+      !session?.user ||
+      session.user.removedAt ||
+      session.revokedAt ||
+      session.expiresAt <= new Date()
+    )
+      return null;
     return { ...toAuthUser(session.user), sessionId: session.id };
+  }
+
+  /** Signs in an account another flow has just created or verified (an accepted invitation). */
+  signInVerified(user: User): Promise<IssuedSession> {
+    return this.openSession(user);
+  }
+
+  /** Ends every live session of an account: its access and refresh tokens stop working at once. */
+  async revokeAllSessions(
+    manager: EntityManager,
+    userId: string,
+    reason: string,
+    at: Date,
+  ): Promise<void> {
+    await manager.update(
+      AuthSession,
+      { userId, revokedAt: IsNull() },
+      { revokedAt: at, revokedReason: reason },
+    );
   }
 
   private async openSession(user: User): Promise<IssuedSession> {

@@ -8,8 +8,10 @@ import {
   OrderStatus,
   platesForGuests,
   type GuestRequirement,
+  type Substitution,
 } from '@nappe/shared';
 import type { DataSource, EntityManager } from 'typeorm';
+import { OrderSubstitutionEntity } from '../allergy-notes/entities/order-substitution.entity.js';
 import { menuFromRows } from '../kitchen/catalogue/catalogue-rows.js';
 import { MenuDessertEntity } from '../kitchen/entities/menu-dessert.entity.js';
 import { MenuEntity } from '../kitchen/entities/menu.entity.js';
@@ -32,7 +34,152 @@ interface DemoOrder {
   venue: string[];
   status: OrderStatus.Requested | OrderStatus.Confirmed;
   guests: GuestRequirement[];
+  /** Plates the chef already changed: guest position, dessert, components (demo ids). */
+  substitutions?: DemoSubstitution[];
 }
+
+interface DemoSubstitution {
+  guest: number;
+  dessert: string;
+  leaveOut?: string[];
+  replace?: Array<[string, string]>;
+  note?: string;
+}
+
+/** Confirmed events over the next two weeks for the prep plan, with real allergy conflicts. */
+const PLANNING_ORDERS: DemoOrder[] = [
+  {
+    demoId: 'order-plan-engagement',
+    menuDemoId: 'menu-garden-supper',
+    daysAhead: 3,
+    serviceTime: '19:30',
+    guestCount: 18,
+    occasion: 'Engagement dinner',
+    venue: ['Huis Verbeke', 'Lange Steenstraat 41', '9000 Gent'],
+    status: OrderStatus.Confirmed,
+    guests: [
+      { label: 'Amira', table: '1', allergens: ['tree_nuts'], diets: [] },
+      { label: 'Bastien', table: '2', allergens: [], diets: ['vegetarian'] },
+    ],
+    substitutions: [
+      {
+        guest: 0,
+        dessert: 'des-pistachio-frost',
+        leaveOut: ['rec-pistachio-parfait'],
+        replace: [['rec-almond-crumble', 'rec-rye-crumble']],
+        note: 'Extra ice cream in place of the parfait',
+      },
+    ],
+  },
+  {
+    demoId: 'order-plan-book-club',
+    menuDemoId: 'menu-autumn-orchard',
+    daysAhead: 4,
+    serviceTime: '20:00',
+    guestCount: 12,
+    occasion: 'Book club tenth year',
+    venue: ['Bibliotheek Zaal', 'Kouter 29', '9000 Gent'],
+    status: OrderStatus.Confirmed,
+    guests: [{ label: 'Greet', table: '1', allergens: ['gluten'], diets: [] }],
+  },
+  {
+    demoId: 'order-plan-wedding',
+    menuDemoId: 'menu-celebration-trio',
+    daysAhead: 6,
+    serviceTime: '21:00',
+    guestCount: 60,
+    occasion: 'Wedding dinner',
+    venue: ['Kasteel Wissekerke', 'Kasteelstraat 1', '9290 Berlare'],
+    status: OrderStatus.Confirmed,
+    guests: [
+      { label: 'Table 3, seat 4', table: '3', allergens: ['nuts'], diets: [] },
+      { label: 'Table 5, seat 1', table: '5', allergens: [], diets: ['no_alcohol'] },
+      { label: 'Table 6, seat 2', table: '6', allergens: [], diets: ['vegetarian'] },
+    ],
+    substitutions: [
+      {
+        guest: 0,
+        dessert: 'des-vanilla-crumble-bowl',
+        replace: [['rec-almond-crumble', 'rec-rye-crumble']],
+      },
+    ],
+  },
+  {
+    demoId: 'order-plan-retirement',
+    menuDemoId: 'menu-garden-supper',
+    daysAhead: 7,
+    serviceTime: '19:00',
+    guestCount: 30,
+    occasion: 'Retirement party',
+    venue: ['Het Pakhuis', 'Schuurkenstraat 4', '9000 Gent'],
+    status: OrderStatus.Confirmed,
+    guests: [{ label: 'Mr Claes', table: '2', allergens: [], diets: ['no_gelatin'] }],
+  },
+  {
+    demoId: 'order-plan-tasting',
+    menuDemoId: 'menu-winter-tasting',
+    daysAhead: 9,
+    serviceTime: '20:30',
+    guestCount: 16,
+    occasion: 'Winter tasting evening',
+    venue: ['Atelier Ondine, back room', 'Sint-Pietersnieuwstraat 12', '9000 Gent'],
+    status: OrderStatus.Confirmed,
+    guests: [{ label: 'Lotte', table: '1', allergens: ['sesame'], diets: [] }],
+  },
+  {
+    demoId: 'order-plan-christening',
+    menuDemoId: 'menu-autumn-orchard',
+    daysAhead: 10,
+    serviceTime: '15:00',
+    guestCount: 22,
+    occasion: 'Christening lunch',
+    venue: ['Zaal De Kring', 'Kerkstraat 7', '9050 Gentbrugge'],
+    status: OrderStatus.Confirmed,
+    guests: [
+      { label: 'Grandma Jo', table: '1', allergens: ['gluten'], diets: [] },
+      { label: 'Noor', table: '2', allergens: ['almond'], diets: [] },
+    ],
+    substitutions: [
+      {
+        guest: 1,
+        dessert: 'des-fig-leaf-smoked-tea',
+        leaveOut: ['rec-almond-crumble'],
+      },
+    ],
+  },
+  {
+    demoId: 'order-plan-board',
+    menuDemoId: 'menu-celebration-trio',
+    daysAhead: 12,
+    serviceTime: '20:00',
+    guestCount: 24,
+    occasion: 'Board dinner',
+    venue: ['Hotel Harmony', 'Kraanlei 37', '9000 Gent'],
+    status: OrderStatus.Confirmed,
+    guests: [{ label: 'Ms Dubois', table: '1', allergens: [], diets: ['vegan'] }],
+  },
+  {
+    demoId: 'order-plan-garden-party',
+    menuDemoId: 'menu-garden-supper',
+    daysAhead: 13,
+    serviceTime: '18:30',
+    guestCount: 40,
+    occasion: 'Summer garden party',
+    venue: ['Tuin Van Damme', 'Heiveldstraat 88', '9040 Sint-Amandsberg'],
+    status: OrderStatus.Confirmed,
+    guests: [
+      { label: 'Yusuf', table: '4', allergens: [], diets: ['vegetarian'] },
+      { label: 'Elise', table: '4', allergens: ['tree_nuts'], diets: [] },
+    ],
+    substitutions: [
+      {
+        guest: 0,
+        dessert: 'des-pistachio-frost',
+        leaveOut: ['rec-pistachio-parfait'],
+      },
+    ],
+  },
+];
 
 const DEMO_ORDERS: DemoOrder[] = [
   {
@@ -83,7 +230,7 @@ export async function seedDemoOrders(dataSource: DataSource, clientEmail: string
     const now = new Date();
     const today = dateInTimeZone(now, studio.settings.timeZone);
     let made = 0;
-    for (const [index, demo] of DEMO_ORDERS.entries()) {
+    for (const [index, demo] of [...DEMO_ORDERS, ...PLANNING_ORDERS].entries()) {
       const id = demoUuid(demo.demoId);
       if (await m.findOneBy(OrderEntity, { id })) continue;
       const menuRow = await m.findOneBy(MenuEntity, { id: demoUuid(demo.menuDemoId) });
@@ -145,7 +292,7 @@ export async function seedDemoOrders(dataSource: DataSource, clientEmail: string
       await m.insert(PaymentEntity, {
         id: demoUuid(`${demo.demoId}/deposit`),
         orderId: id,
-        kind: 'deposit',
+        kind: quote.paymentPlan === 'full' ? 'full' : 'deposit',
         status: 'succeeded',
         amountMinor: quote.depositMinor,
         currency: quote.currency,
@@ -191,6 +338,34 @@ export async function seedDemoOrders(dataSource: DataSource, clientEmail: string
           toStatus: OrderStatus.Confirmed,
           summary: 'Confirmed by the chef; added to the prep plan',
           at: at(2 * 24 * 60),
+        });
+      }
+      const studioChef = await m.findOneBy(User, { role: 'chef' as User['role'] });
+      for (const sub of demo.substitutions ?? []) {
+        const guest = demo.guests[sub.guest]!;
+        const changes: Substitution[] = [
+          ...(sub.leaveOut ?? []).map((r) => ({ componentRecipeId: demoUuid(r) })),
+          ...(sub.replace ?? []).map(([from, to]) => ({
+            componentRecipeId: demoUuid(from),
+            replacementRecipeId: demoUuid(to),
+          })),
+        ];
+        await m.insert(OrderSubstitutionEntity, {
+          id: demoUuid(`${demo.demoId}/sub/${sub.guest}/${sub.dessert}`),
+          orderId: id,
+          guestPosition: sub.guest,
+          guestLabel: guest.label,
+          dessertId: demoUuid(sub.dessert),
+          changes,
+          note: sub.note ?? null,
+          recordedBy: studioChef?.id ?? null,
+          recordedAt: at(2 * 24 * 60 + 30),
+        });
+        events.push({
+          actorUserId: studioChef?.id ?? null,
+          actorRole: studioChef ? 'chef' : 'system',
+          summary: `Substitution for ${guest.label} recorded (demo record)`,
+          at: at(2 * 24 * 60 - 5),
         });
       }
       await insertEvents(m, id, events);

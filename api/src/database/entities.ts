@@ -1,3 +1,6 @@
+import { GuestDataAccessEntity } from '../allergy-notes/entities/guest-data-access.entity.js';
+import { OrderSubstitutionEntity } from '../allergy-notes/entities/order-substitution.entity.js';
+import { PrepTaskTickEntity } from '../prep/entities/prep-task-tick.entity.js';
 import { AuthSession } from '../auth/entities/auth-session.entity.js';
 import { kitchenEntities } from '../kitchen/entities/kitchen-entities.js';
 import { OutboxMessageEntity } from '../mail/entities/outbox-message.entity.js';
@@ -8,6 +11,8 @@ import { PaymentEntity } from '../payments/entities/payment.entity.js';
 import { ProcessedWebhookEventEntity } from '../payments/entities/processed-webhook-event.entity.js';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
+import { SettingsChangeEntity } from '../studio/entities/settings-change.entity.js';
+import { StaffInvitationEntity } from '../studio/entities/staff-invitation.entity.js';
 
 export const bookingEntities = [
   OrderEntity,
@@ -19,4 +24,15 @@ export const bookingEntities = [
 ];
 
 /** Every entity, listed once for the app module, the CLI data source and the tests. */
-export const entities = [User, AuthSession, StudioSettings, ...kitchenEntities, ...bookingEntities];
+export const entities = [
+  User,
+  AuthSession,
+  StudioSettings,
+  ...kitchenEntities,
+  ...bookingEntities,
+  SettingsChangeEntity,
+  StaffInvitationEntity,
+  OrderSubstitutionEntity,
+  GuestDataAccessEntity,
+  PrepTaskTickEntity,
+];

@@ -23,5 +23,6 @@ import { RecipesService } from './recipes/recipes.service.js';
     DessertsService,
     MenusService,
   ],
+  exports: [KitchenCatalogueService],
 })
 export class KitchenModule {}

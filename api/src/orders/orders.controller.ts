@@ -29,6 +29,7 @@ import {
   type OrderSummary,
 } from '@nappe/shared';
 import type { Response } from 'express';
+import { confirmBodySchema, type ConfirmBody } from '../allergy-notes/allergy-notes.dto.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import type { Principal } from '../auth/principal.js';
@@ -159,9 +160,9 @@ export class OrdersController {
   confirm(
     @CurrentUser() user: Principal,
     @Param('id') id: string,
-    @Body(new ZodValidationPipe(orderReasonSchema)) body: OrderReasonRequest,
+    @Body(new ZodValidationPipe(confirmBodySchema)) body: ConfirmBody,
   ): Promise<OrderDetail> {
-    return this.orders.confirm(user, id, body.reason);
+    return this.orders.confirm(user, id, body.reason, body.overrideReason);
   }
 
   @Roles(Role.Chef)

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { APP_FILTER } from '@nestjs/core';
+import { AllergyNotesModule } from '../allergy-notes/allergy-notes.module.js';
 import { DocumentsModule } from '../documents/documents.module.js';
 import { MailModule } from '../mail/mail.module.js';
 import { CheckoutService } from '../payments/checkout.service.js';
@@ -21,7 +22,7 @@ import { OrdersService } from './orders.service.js';
  * webhooks, refunds, the ledger), documents and the e-mails they cause.
  */
 @Module({
-  imports: [MailModule, DocumentsModule],
+  imports: [MailModule, DocumentsModule, AllergyNotesModule],
   controllers: [BookingController, OrdersController, WebhooksController],
   providers: [
     { provide: APP_FILTER, useClass: BookingErrorFilter },

@@ -39,7 +39,9 @@ import {
   type RefundResult,
 } from '@nappe/shared';
 import { DataSource, In, QueryFailedError, type EntityManager } from 'typeorm';
+import { AllergyNotesService } from '../allergy-notes/allergy-notes.service.js';
 import type { Principal } from '../auth/principal.js';
+import { likePattern } from '../kitchen/catalogue/kitchen-catalogue.service.js';
 import type { Page } from '../common/page.js';
 import { Env } from '../config/env.js';
 import { DocumentsService, type RenderedDocument } from '../documents/documents.service.js';
@@ -115,6 +117,7 @@ export class OrdersService {
     private readonly gateway: PaymentGateway,
     private readonly documents: DocumentsService,
     private readonly env: Env,
+    private readonly allergyNotes: AllergyNotesService,
   ) {}
 
   // ---------------------------------------------------------------- public
@@ -326,6 +329,24 @@ export class OrdersService {
       const qb = m.createQueryBuilder(OrderEntity, 'o');
       if (principal.role === Role.Client) qb.where('o.clientId = :me', { me: principal.id });
       if (query.status) qb.andWhere('o.status = :status', { status: query.status });
+      for (const [name, value] of [
+        ['from', query.from],
+        ['to', query.to],
+      ] as const) {
+        if (value !== undefined && !isIsoDate(value))
+          throw new BadRequestException([`${name} must be a real date written like 2026-06-21.`]);
+      }
+      if (query.from && query.to && query.from > query.to) {
+        throw new BadRequestException(['from must be on or before to.']);
+      }
+      if (query.from) qb.andWhere('o.eventDate >= :from', { from: query.from });
+      if (query.to) qb.andWhere('o.eventDate <= :to', { to: query.to });
+      if (query.q?.trim()) {
+        qb.leftJoin(User, 'searchClient', 'searchClient.id = o.clientId').andWhere(
+          `(LOWER(o.reference) LIKE :pattern ESCAPE '\\' OR LOWER(searchClient.name) LIKE :pattern ESCAPE '\\')`,
+          { pattern: likePattern(query.q) },
+        );
+      }
       const [orders, total] = await qb
         .orderBy('o.createdAt', 'DESC')
         .addOrderBy('o.id', 'DESC')
@@ -355,9 +376,13 @@ export class OrdersService {
   }
 
   get(principal: Principal, id: string): Promise<OrderDetail> {
-    return this.dataSource.transaction(async (m) =>
-      this.views.detail(m, await orderFor(m, principal, id)),
-    );
+    return this.dataSource.transaction(async (m) => {
+      const detail = await this.views.detail(m, await orderFor(m, principal, id));
+      // The detail lists the guests' requirements: the studio's openings are logged.
+      if (detail.guests.length > 0)
+        await this.allergyNotes.logAccess(m, principal, id, 'guest_list');
+      return detail;
+    });
   }
 
   // ---------------------------------------------------------------- cancel and decline
@@ -518,9 +543,19 @@ export class OrdersService {
 
   // ---------------------------------------------------------------- chef
 
-  confirm(principal: Principal, id: string, reason: string | undefined): Promise<OrderDetail> {
+  confirm(
+    principal: Principal,
+    id: string,
+    reason: string | undefined,
+    overrideReason?: string,
+  ): Promise<OrderDetail> {
     return this.dataSource.transaction(async (m) => {
       const order = await orderFor(m, principal, id);
+      // Unresolved allergy conflicts and a too-short lead time block it unless overridden.
+      const overridden =
+        order.status === OrderStatus.Requested
+          ? await this.allergyNotes.assertConfirmable(m, order, overrideReason)
+          : null;
       await transitionOrder(
         m,
         this.context.now(),
@@ -532,6 +567,12 @@ export class OrdersService {
           reason,
         },
       );
+      if (overridden) {
+        await recordEvent(m, this.context.now(), order.id, actorOf(principal), {
+          summary: overridden,
+          reason: overrideReason,
+        });
+      }
       await this.notifications.confirmed(m, order);
       return this.views.detail(m, order);
     });

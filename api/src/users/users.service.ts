@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { Repository } from 'typeorm';
+import { IsNull, Repository } from 'typeorm';
 import type { Page } from '../common/page.js';
 import type { ListUsersQuery } from './dto/list-users.query.js';
 import { User } from './entities/user.entity.js';
@@ -12,6 +12,7 @@ export class UsersService {
 
   async list(query: ListUsersQuery): Promise<Page<UserListItem>> {
     const [rows, total] = await this.users.findAndCount({
+      where: { removedAt: IsNull() },
       order: { role: 'ASC', name: 'ASC', id: 'ASC' },
       skip: (query.page - 1) * query.pageSize,
       take: query.pageSize,

@@ -2,6 +2,8 @@ import { InitialSchema1764633600000 } from './1764633600000-initial-schema.js';
 import { KitchenCatalogue1764720000000 } from './1764720000000-kitchen-catalogue.js';
 import { BookingSettings1764806400000 } from './1764806400000-booking-settings.js';
 import { OrdersAndPayments1764892800000 } from './1764892800000-orders-and-payments.js';
+import { AllergyNotesAndPrep1765200000000 } from './1765200000000-allergy-notes-and-prep.js';
+import { SettingsAndTeam1765100000000 } from './1765100000000-settings-and-team.js';
 
 /** Every migration, in order. Listed as classes (a glob does not work with ESM builds). */
 export const migrations = [
@@ -9,4 +11,6 @@ export const migrations = [
   KitchenCatalogue1764720000000,
   BookingSettings1764806400000,
   OrdersAndPayments1764892800000,
+  SettingsAndTeam1765100000000,
+  AllergyNotesAndPrep1765200000000,
 ];

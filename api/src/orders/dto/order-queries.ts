@@ -28,6 +28,27 @@ export class ListOrdersQuery {
   @IsOptional()
   @IsIn(ORDER_STATUSES, { message: `status must be one of: ${ORDER_STATUSES.join(', ')}` })
   status?: OrderStatus;
+
+  /** Events on or after this date (`YYYY-MM-DD`, the studio's calendar). */
+  @ApiPropertyOptional({ example: '2026-06-01' })
+  @IsOptional()
+  @IsString()
+  @Matches(ISO_DATE, { message: 'from must be a date written YYYY-MM-DD' })
+  from?: string;
+
+  /** Events on or before this date. */
+  @ApiPropertyOptional({ example: '2026-06-30' })
+  @IsOptional()
+  @IsString()
+  @Matches(ISO_DATE, { message: 'to must be a date written YYYY-MM-DD' })
+  to?: string;
+
+  /** Part of the reference or of the client's name, any case. */
+  @ApiPropertyOptional({ maxLength: 100 })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100, { message: 'Search with at most 100 characters.' })
+  q?: string;
 }
 
 /** `GET /api/availability?menuId&from&to[&guests]` (dates checked as real dates by the service). */

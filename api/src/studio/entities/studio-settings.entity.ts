@@ -59,6 +59,17 @@ export class StudioSettings {
   @Column({ name: 'guest_data_retention_days', type: 'integer' })
   guestDataRetentionDays: number;
 
+  /** Hands-on kitchen work happens between these local times (`HH:MM`). */
+  @Column({ name: 'working_hours_start', type: 'varchar', length: 5 })
+  workingHoursStart: string;
+
+  @Column({ name: 'working_hours_end', type: 'varchar', length: 5 })
+  workingHoursEnd: string;
+
+  /** Every component is finished at least this long before service, for plating. */
+  @Column({ name: 'plating_buffer_minutes', type: 'integer' })
+  platingBufferMinutes: number;
+
   @UpdateDateColumn({ name: 'updated_at' })
   updatedAt: Date;
 }

@@ -27,6 +27,10 @@ export class User {
   @Column({ type: 'varchar', length: 16 })
   role: Role;
 
+  /** Set when the chef removes a team member: they can no longer sign in; their history stays. */
+  @Column({ name: 'removed_at', type: 'datetime', nullable: true })
+  removedAt: Date | null;
+
   @CreateDateColumn({ name: 'created_at' })
   createdAt: Date;
 
