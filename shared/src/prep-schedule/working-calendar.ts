@@ -53,9 +53,17 @@ export const prepSettingsSchema = z.object({
   /** Hands-on work happens between these local times, every day. */
   workingHours: z
     .object({ start: clockSchema('The opening time'), end: clockSchema('The closing time') })
-    .refine((h) => clockMinutes(h.end) > clockMinutes(h.start), {
-      message: 'Working hours must end after they start on the same day (for example 07:00–19:00).',
-    })
+    // Compared only when both times are valid: a malformed one has its own message already.
+    .refine(
+      (h) =>
+        !clockSchema('').safeParse(h.start).success ||
+        !clockSchema('').safeParse(h.end).success ||
+        clockMinutes(h.end) > clockMinutes(h.start),
+      {
+        message:
+          'Working hours must end after they start on the same day (for example 07:00–19:00).',
+      },
+    )
     .default({ start: '07:00', end: '19:00' }),
   /** Every component is finished at least this long before service, for plating. */
   platingBufferMinutes: z

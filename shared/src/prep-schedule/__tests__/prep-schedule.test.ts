@@ -14,6 +14,7 @@ import {
   StepLongerThanWorkingDayError,
   WorkingCalendar,
   parsePrepSettings,
+  prepSettingsSchema,
 } from '../working-calendar.js';
 import { toZonedIso, zonedToInstant } from '../zoned-time.js';
 
@@ -549,5 +550,16 @@ describe('schedule properties (fast-check)', () => {
       }),
       { numRuns: 300 },
     );
+  });
+});
+
+describe('prep settings validation', () => {
+  it('gives a readable message for a malformed time instead of throwing inside the check', () => {
+    const parsed = prepSettingsSchema.safeParse({
+      studioTimeZone: 'Europe/Brussels',
+      workingHours: { start: '7am', end: '19:00' },
+    });
+    expect(parsed.success).toBe(false);
+    expect(parsed.error?.issues.map((i) => i.path.join('.'))).toContain('workingHours.start');
   });
 });
