@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router';
+import { createBrowserRouter, Navigate, RouterProvider, type RouteObject } from 'react-router';
 import { PageLoader } from '../components/ui/page-loader';
 import { paths } from '../config/paths';
 import { guestOnlyLoader, requireUserLoader } from './guards';
@@ -33,9 +33,100 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               }),
             },
             {
+              path: paths.menus.path,
+              lazy: async () => {
+                const m = await import('./routes/menus');
+                return { Component: m.MenusRoute, loader: m.menusLoader(queryClient) };
+              },
+            },
+            {
+              path: paths.menu.path,
+              lazy: async () => {
+                const m = await import('./routes/menu-detail');
+                return { Component: m.MenuDetailRoute, loader: m.menuDetailLoader(queryClient) };
+              },
+            },
+            {
+              path: paths.dates.path,
+              lazy: async () => {
+                const m = await import('./routes/dates');
+                return {
+                  Component: m.DatesRoute,
+                  loader: m.datesLoader(queryClient),
+                  shouldRevalidate: m.shouldRevalidate,
+                };
+              },
+            },
+            {
+              path: paths.book.path,
+              lazy: async () => {
+                const m = await import('./routes/book/book-layout');
+                return { Component: m.BookLayoutRoute, loader: m.bookLoader(queryClient) };
+              },
+              children: [
+                { index: true, element: <Navigate to="event" replace /> },
+                {
+                  path: 'event',
+                  lazy: async () => ({
+                    Component: (await import('./routes/book/event-step')).EventStepRoute,
+                  }),
+                },
+                {
+                  path: 'guests',
+                  lazy: async () => ({
+                    Component: (await import('./routes/book/guests-step')).GuestsStepRoute,
+                  }),
+                },
+                {
+                  path: 'review',
+                  lazy: async () => ({
+                    Component: (await import('./routes/book/review-step')).ReviewStepRoute,
+                  }),
+                },
+                {
+                  path: 'payment',
+                  // Booking needs an account: a visitor signs in here and comes straight back.
+                  loader: requireUserLoader(queryClient),
+                  lazy: async () => ({
+                    Component: (await import('./routes/book/payment-step')).PaymentStepRoute,
+                  }),
+                },
+              ],
+            },
+            {
               path: paths.myEvents.path,
-              loader: requireUserLoader(queryClient),
-              lazy: async () => ({ Component: (await import('./routes/my-events')).MyEventsRoute }),
+              lazy: async () => {
+                const m = await import('./routes/my-events');
+                return { Component: m.MyEventsRoute, loader: m.myEventsLoader(queryClient) };
+              },
+            },
+            {
+              path: paths.event.path,
+              lazy: async () => {
+                const m = await import('./routes/event-detail');
+                return {
+                  Component: m.EventDetailRoute,
+                  loader: m.eventDetailLoader(queryClient),
+                  shouldRevalidate: m.shouldRevalidate,
+                };
+              },
+            },
+            {
+              path: paths.changeGuests.path,
+              lazy: async () => {
+                const m = await import('./routes/change-guests');
+                return {
+                  Component: m.ChangeGuestsRoute,
+                  loader: m.changeGuestsLoader(queryClient),
+                };
+              },
+            },
+            {
+              path: paths.booked.path,
+              lazy: async () => {
+                const m = await import('./routes/booked');
+                return { Component: m.BookedRoute, loader: m.bookedLoader(queryClient) };
+              },
             },
             {
               path: paths.signIn.path,

@@ -2,7 +2,7 @@ import { http, HttpResponse } from 'msw';
 import { describe, expect, it, vi } from 'vitest';
 import { clientUser, sessionFor } from '../testing/fixtures';
 import { server } from '../testing/server';
-import { ApiError, createApiClient, parseRetryAfter } from './api-client';
+import { ApiError, createApiClient, fileNameFrom, parseRetryAfter } from './api-client';
 
 const OLD = 'expired-token';
 const NEW = 'fresh-token';
@@ -192,6 +192,61 @@ describe('api client', () => {
     const error = (await client.get('/studio').catch((e: unknown) => e)) as ApiError;
     expect(error.status).toBe(0);
     expect(error.message).toMatch(/could not reach Nappe/);
+  });
+});
+
+describe('extra headers and files', () => {
+  it('sends the headers it is given, such as an idempotency key', async () => {
+    const client = createApiClient();
+    let key: string | null = null;
+    server.use(
+      http.post('/api/orders', ({ request }) => {
+        key = request.headers.get('Idempotency-Key');
+        return HttpResponse.json({ id: 'order-1' }, { status: 201 });
+      }),
+    );
+    client.setSession(sessionFor(clientUser, NEW));
+    await client.post('/orders', {}, { headers: { 'Idempotency-Key': 'attempt-1' } });
+    expect(key).toBe('attempt-1');
+  });
+
+  it('downloads a file with the Bearer token, refreshing it first when it has expired', async () => {
+    const client = createApiClient();
+    server.use(
+      http.get('/api/orders/order-1/event.ics', ({ request }) =>
+        request.headers.get('Authorization') === `Bearer ${NEW}`
+          ? new HttpResponse('BEGIN:VCALENDAR', {
+              headers: {
+                'Content-Type': 'text/calendar',
+                'Content-Disposition': 'attachment; filename="event.ics"',
+              },
+            })
+          : HttpResponse.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 }),
+      ),
+      http.post('/api/auth/refresh', () => HttpResponse.json(sessionFor(clientUser, NEW))),
+    );
+    client.setSession(sessionFor(clientUser, OLD));
+    const file = await client.download('/orders/order-1/event.ics');
+    expect(file.fileName).toBe('event.ics');
+    expect(file.blob.type).toBe('text/calendar');
+    expect(await file.blob.text()).toBe('BEGIN:VCALENDAR');
+  });
+});
+
+describe('fileNameFrom (Content-Disposition, RFC 6266)', () => {
+  it('reads the examples of RFC 6266 §5', () => {
+    expect(fileNameFrom('Attachment; filename=example.html')).toBe('example.html');
+    // With both forms, the RFC 8187 `filename*` wins: "€ rates.txt".
+    expect(
+      fileNameFrom(`attachment; filename="EURO rates.txt"; filename*=utf-8''%e2%82%ac%20rates.txt`),
+    ).toBe('€ rates.txt');
+    expect(fileNameFrom(`attachment; filename*= UTF-8''%e2%82%ac%20rates.txt`)).toBe('€ rates.txt');
+  });
+
+  it('never lets a name point into a folder, and gives up on nothing usable', () => {
+    expect(fileNameFrom('attachment; filename="../../etc/passwd"')).toBe('.._.._etc_passwd');
+    expect(fileNameFrom('inline')).toBeNull();
+    expect(fileNameFrom(null)).toBeNull();
   });
 });
 

@@ -27,6 +27,16 @@ export interface RequestOptions {
   /** false for the sign-in endpoints: no Bearer header, and a 401 is an answer, not an expiry. */
   auth?: boolean;
   signal?: AbortSignal;
+  /** Extra request headers, e.g. `Idempotency-Key` on a booking. */
+  headers?: Record<string, string>;
+  /** `blob` for files (receipts, calendar files): they need the Bearer header too. */
+  responseType?: 'json' | 'blob';
+}
+
+/** A file fetched with the session's token, with the name the server suggests. */
+export interface DownloadedFile {
+  blob: Blob;
+  fileName: string | null;
 }
 
 type SessionListener = (session: AuthSession | null) => void;
@@ -65,7 +75,10 @@ export function createApiClient(options: ApiClientOptions = {}) {
   }
 
   async function send(path: string, opts: RequestOptions, token: string | null): Promise<Response> {
-    const headers: Record<string, string> = { Accept: 'application/json' };
+    const headers: Record<string, string> = {
+      Accept: opts.responseType === 'blob' ? '*/*' : 'application/json',
+      ...opts.headers,
+    };
     if (opts.body !== undefined) headers['Content-Type'] = 'application/json';
     if (token) headers.Authorization = `Bearer ${token}`;
     try {
@@ -119,6 +132,13 @@ export function createApiClient(options: ApiClientOptions = {}) {
     }
 
     if (!res.ok) throw await toApiError(res);
+    if (opts.responseType === 'blob') {
+      const file: DownloadedFile = {
+        blob: await res.blob(),
+        fileName: fileNameFrom(res.headers.get('Content-Disposition')),
+      };
+      return file as T;
+    }
     if (res.status === 204) return undefined as T;
     const text = await res.text();
     return (text ? JSON.parse(text) : undefined) as T;
@@ -130,6 +150,11 @@ export function createApiClient(options: ApiClientOptions = {}) {
       request<T>(path, { ...opts, method: 'GET' }),
     post: <T>(path: string, body?: unknown, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
       request<T>(path, { ...opts, method: 'POST', body }),
+    put: <T>(path: string, body?: unknown, opts: Omit<RequestOptions, 'method' | 'body'> = {}) =>
+      request<T>(path, { ...opts, method: 'PUT', body }),
+    /** A file behind the session (the browser cannot add the Bearer header to a plain link). */
+    download: (path: string, opts: Omit<RequestOptions, 'method' | 'body' | 'responseType'> = {}) =>
+      request<DownloadedFile>(path, { ...opts, method: 'GET', responseType: 'blob' }),
     refreshSession,
     /** On app start: trade the refresh cookie, if any, for a session. Null when signed out. */
     restoreSession: (): Promise<AuthSession | null> => refreshSession(),
@@ -163,6 +188,29 @@ function fallbackMessage(status: number): string {
   if (status === 429) return 'Too many attempts. Please wait a little and try again.';
   if (status >= 500) return 'Something went wrong on our side. Please try again in a moment.';
   return `The request failed (${status}).`;
+}
+
+/**
+ * The file name from `Content-Disposition` (RFC 6266): `filename*=UTF-8''…` (RFC 8187) wins over
+ * a plain `filename="…"`. Path separators are dropped so a name can never point elsewhere.
+ */
+export function fileNameFrom(header: string | null): string | null {
+  if (!header) return null;
+  let name: string | null = null;
+  const extended = /filename\*\s*=\s*([^']*)'[^']*'([^;]+)/i.exec(header);
+  if (extended) {
+    try {
+      name = decodeURIComponent(extended[2]!.trim());
+    } catch {
+      name = null;
+    }
+  }
+  if (name === null) {
+    const plain = /filename\s*=\s*(?:"((?:[^"\\]|\\.)*)"|([^;\s]+))/i.exec(header);
+    name = plain ? (plain[1]?.replace(/\\(.)/g, '$1') ?? plain[2] ?? null) : null;
+  }
+  const safe = name?.replace(/[\\/]/g, '_').trim();
+  return safe ? safe : null;
 }
 
 /** `Retry-After` is either delay-seconds or an HTTP date (RFC 9110 §10.2.3). */

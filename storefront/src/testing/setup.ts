@@ -12,6 +12,8 @@ afterEach(() => {
   cleanup();
   server.resetHandlers();
   api.clearSession();
+  window.sessionStorage.clear();
+  window.localStorage.clear();
 });
 afterAll(() => server.close());
 

@@ -24,6 +24,9 @@ import { PlateIllustration } from '../../components/ui/plate-illustration';
 import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
+import { useMenus } from '../../features/menus/api/get-menus';
+import { MenuCard } from '../../features/menus/components/menu-card';
+import { MenuGridSkeleton } from '../../features/menus/components/menu-skeletons';
 import { useStudio } from '../../features/studio/api/get-studio';
 
 const OCCASIONS = [
@@ -112,19 +115,13 @@ export function HomeRoute() {
               </Text>
               <HStack gap="3" wrap="wrap">
                 <Button asChild size="lg" colorPalette="accent">
-                  <RouterLink to={paths.howBookingWorks.getHref()}>
-                    How booking works <ArrowRightIcon />
+                  <RouterLink to={paths.menus.getHref()}>
+                    See the menus <ArrowRightIcon />
                   </RouterLink>
                 </Button>
-                {signedIn ? (
-                  <Button asChild size="lg" variant="outline">
-                    <RouterLink to={paths.myEvents.getHref()}>My events</RouterLink>
-                  </Button>
-                ) : (
-                  <Button asChild size="lg" variant="outline">
-                    <RouterLink to={paths.createAccount.getHref()}>Create account</RouterLink>
-                  </Button>
-                )}
+                <Button asChild size="lg" variant="outline">
+                  <RouterLink to={paths.howBookingWorks.getHref()}>How booking works</RouterLink>
+                </Button>
               </HStack>
             </Stack>
             <Box flex="1" w="full" maxW={{ base: '20rem', md: '28rem' }}>
@@ -133,6 +130,8 @@ export function HomeRoute() {
           </Flex>
         </Container>
       </Box>
+
+      <FeaturedMenus />
 
       <Container
         as="section"
@@ -220,26 +219,77 @@ export function HomeRoute() {
               Planning an event?
             </Heading>
             <Text color="fg.inverted" opacity={0.85}>
-              Our menus and online booking open shortly. Create your account now and you can book
-              the day they do.
+              Choose a menu and an open date, tell us about your guests, and see the full price
+              before you pay anything.
             </Text>
             <HStack gap="2" color="accent.muted" textStyle="sm">
               <CheckIcon boxSize="4" flexShrink="0" />
-              <Text>Free to create; you pay only when you book.</Text>
+              <Text>A deposit holds your date; the balance is due shortly before the event.</Text>
             </HStack>
           </Stack>
-          {signedIn ? (
+          <HStack gap="3" wrap="wrap">
             <Button asChild size="lg" colorPalette="accent">
-              <RouterLink to={paths.myEvents.getHref()}>Go to My events</RouterLink>
+              <RouterLink to={paths.dates.getHref()}>See open dates</RouterLink>
             </Button>
-          ) : (
-            <Button asChild size="lg" colorPalette="accent">
-              <RouterLink to={paths.createAccount.getHref()}>Create account</RouterLink>
-            </Button>
-          )}
+            {signedIn ? (
+              <Button
+                asChild
+                size="lg"
+                variant="outline"
+                color="fg.inverted"
+                borderColor="fg.inverted"
+                _hover={{ bg: 'whiteAlpha.200' }}
+              >
+                <RouterLink to={paths.myEvents.getHref()}>Go to My events</RouterLink>
+              </Button>
+            ) : (
+              <Button
+                asChild
+                size="lg"
+                variant="outline"
+                color="fg.inverted"
+                borderColor="fg.inverted"
+                _hover={{ bg: 'whiteAlpha.200' }}
+              >
+                <RouterLink to={paths.createAccount.getHref()}>Create account</RouterLink>
+              </Button>
+            )}
+          </HStack>
         </Stack>
       </Container>
     </>
+  );
+}
+
+/** Up to three menus, photo first; the section stays out of the way if they cannot load. */
+function FeaturedMenus() {
+  const menus = useMenus(1, 3);
+  if (menus.isError || (menus.data && menus.data.items.length === 0)) return null;
+  return (
+    <Container
+      as="section"
+      aria-labelledby="menus-heading"
+      maxW="6xl"
+      pt={{ base: '12', md: '16' }}
+    >
+      <HStack justify="space-between" align="end" gap="4" wrap="wrap">
+        <SectionHeading id="menus-heading" eyebrow="This season">
+          Menus to book
+        </SectionHeading>
+        <TextLink to={paths.menus.getHref()}>All menus</TextLink>
+      </HStack>
+      <Box mt="8">
+        {menus.isPending ? (
+          <MenuGridSkeleton />
+        ) : (
+          <SimpleGrid columns={{ base: 1, md: 2, lg: 3 }} gap="6">
+            {menus.data.items.map((menu) => (
+              <MenuCard key={menu.id} menu={menu} />
+            ))}
+          </SimpleGrid>
+        )}
+      </Box>
+    </Container>
   );
 }
 

@@ -1,4 +1,4 @@
-import { Alert, Box, Button, Container, Flex, Heading, Stack, Text } from '@chakra-ui/react';
+import { Box, Button, Container, Flex, Heading, Stack, Text } from '@chakra-ui/react';
 import { Link as RouterLink } from 'react-router';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
@@ -50,16 +50,14 @@ export function HowBookingWorksRoute() {
           </Text>
         </Stack>
 
-        <Alert.Root status="warning" mt="8" borderRadius="l2">
-          <Alert.Indicator />
-          <Alert.Content>
-            <Alert.Title>Menus and online booking open shortly</Alert.Title>
-            <Alert.Description>
-              The chef is putting the finishing touches to this season’s menus. You can already
-              create an account, and book here as soon as they are published.
-            </Alert.Description>
-          </Alert.Content>
-        </Alert.Root>
+        <Flex gap="3" wrap="wrap" mt="8">
+          <Button asChild colorPalette="accent">
+            <RouterLink to={paths.menus.getHref()}>See the menus</RouterLink>
+          </Button>
+          <Button asChild variant="outline">
+            <RouterLink to={paths.dates.getHref()}>See open dates</RouterLink>
+          </Button>
+        </Flex>
 
         <Box as="ol" listStyleType="none" mt="10">
           {STEPS.map((step, index) => (
@@ -124,16 +122,19 @@ export function HowBookingWorksRoute() {
         </Stack>
 
         <Flex gap="3" wrap="wrap" mt="10">
+          <Button asChild size="lg" colorPalette="accent">
+            <RouterLink to={paths.menus.getHref()}>Choose a menu</RouterLink>
+          </Button>
           {me.data ? (
-            <Button asChild size="lg">
+            <Button asChild size="lg" variant="outline">
               <RouterLink to={paths.myEvents.getHref()}>Go to My events</RouterLink>
             </Button>
           ) : (
             <>
-              <Button asChild size="lg">
+              <Button asChild size="lg" variant="outline">
                 <RouterLink to={paths.createAccount.getHref()}>Create account</RouterLink>
               </Button>
-              <Button asChild size="lg" variant="outline">
+              <Button asChild size="lg" variant="ghost">
                 <RouterLink to={paths.signIn.getHref()}>Sign in</RouterLink>
               </Button>
             </>

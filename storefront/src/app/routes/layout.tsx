@@ -40,7 +40,7 @@ function NavItem({ to, end, children }: { to: string; end?: boolean; children: R
   return (
     <Link
       asChild
-      px="3"
+      px={{ base: '2', sm: '3' }}
       py="2"
       borderRadius="l2"
       whiteSpace="nowrap"
@@ -75,11 +75,17 @@ function Header() {
             mx={{ base: '-3', md: '0' }}
             overflowX="auto"
           >
-            <HStack as="ul" gap="1" listStyleType="none">
+            <HStack as="ul" gap={{ base: '0', sm: '1' }} listStyleType="none">
               <li>
                 <NavItem to={paths.home.getHref()} end>
                   Home
                 </NavItem>
+              </li>
+              <li>
+                <NavItem to={paths.menus.getHref()}>Menus</NavItem>
+              </li>
+              <li>
+                <NavItem to={paths.dates.getHref()}>Dates</NavItem>
               </li>
               <li>
                 <NavItem to={paths.howBookingWorks.getHref()}>How booking works</NavItem>
@@ -129,6 +135,13 @@ function AccountActions() {
           onClick={async () => {
             // Leave any private page first, so it is not asked to redirect to Sign in.
             await navigate(paths.home.getHref());
+            // A booking in progress (with its guests' allergies) must not outlive the person
+            // in this tab: it lives in sessionStorage only, so forget it with the session.
+            try {
+              window.sessionStorage.clear();
+            } catch {
+              // Storage switched off: there is nothing kept to forget.
+            }
             logout.mutate();
           }}
         >
@@ -179,6 +192,12 @@ function Footer() {
             )}
           </Stack>
           <Stack as="nav" aria-label="Footer" gap="2" textStyle="sm">
+            <Link asChild color="fg.muted">
+              <RouterLink to={paths.menus.getHref()}>Menus</RouterLink>
+            </Link>
+            <Link asChild color="fg.muted">
+              <RouterLink to={paths.dates.getHref()}>Dates</RouterLink>
+            </Link>
             <Link asChild color="fg.muted">
               <RouterLink to={paths.howBookingWorks.getHref()}>How booking works</RouterLink>
             </Link>

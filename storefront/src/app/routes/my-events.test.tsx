@@ -1,6 +1,11 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
+import {
+  emptyDraft,
+  readBookingDraft,
+  writeBookingDraft,
+} from '../../features/booking/draft/booking-draft';
 import { clientUser, sessionFor } from '../../testing/fixtures';
 import { renderApp } from '../../testing/render-app';
 import { server } from '../../testing/server';
@@ -30,10 +35,11 @@ describe('My events', () => {
       'href',
       '/how-booking-works',
     );
+    expect(screen.getByRole('link', { name: 'See the menus' })).toHaveAttribute('href', '/menus');
     expect(document.title).toBe('My events · Nappe');
   });
 
-  it('signing out leaves the protected page for the home page', async () => {
+  it('signing out leaves the protected page for the home page and forgets any booking draft', async () => {
     server.use(
       http.post('/api/auth/refresh', () => HttpResponse.json(sessionFor(clientUser))),
       http.post('/api/auth/logout', ({ request }) => {
@@ -41,6 +47,15 @@ describe('My events', () => {
         return new HttpResponse(null, { status: 204 });
       }),
     );
+    // A booking in progress, with a guest's allergies, in this tab's session.
+    writeBookingDraft({
+      ...emptyDraft('menu-summer'),
+      guests: {
+        guestCount: 12,
+        guestRequirements: [{ label: 'Léon', allergens: ['nuts'], diets: [] }],
+        guestDataConsent: true,
+      },
+    });
     const { user, router } = renderApp('/my-events');
     const header = within(await screen.findByRole('banner'));
 
@@ -48,6 +63,8 @@ describe('My events', () => {
 
     await waitFor(() => expect(router.state.location.pathname).toBe('/'));
     expect(await header.findByRole('link', { name: 'Sign in' })).toBeInTheDocument();
+    expect(readBookingDraft()).toBeNull();
+    expect(window.sessionStorage.length).toBe(0);
   });
 
   it('explains a throttled session check instead of pretending nobody is signed in', async () => {

@@ -1,9 +1,129 @@
-import { Button, Container, EmptyState, Heading, Stack, Text, VStack } from '@chakra-ui/react';
-import { Link as RouterLink } from 'react-router';
+import {
+  Button,
+  Container,
+  EmptyState,
+  Heading,
+  HStack,
+  Stack,
+  Text,
+  VStack,
+} from '@chakra-ui/react';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { CalendarIcon } from '../../components/ui/icons';
 import { PageTitle } from '../../components/ui/page-title';
+import { LoadError } from '../../components/ui/query-state';
+import { Skeleton } from '../../components/ui/skeleton';
 import { paths } from '../../config/paths';
 import { RequireUser } from '../../features/auth/components/require-user';
+import { ordersQueryOptions, useOrders } from '../../features/orders/api/get-orders';
+import { OrderCard } from '../../features/orders/components/order-card';
+import { pageCount, pageFromSearch } from '../../lib/page';
+import { requireUserLoader } from '../guards';
+import { warm } from '../loaders';
+
+export const myEventsLoader = (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {
+  await requireUserLoader(queryClient)(args);
+  const page = pageFromSearch(new URL(args.request.url).searchParams.get('page'));
+  await warm(queryClient, ordersQueryOptions(page));
+  return null;
+};
+
+function EventList() {
+  const [searchParams] = useSearchParams();
+  const page = pageFromSearch(searchParams.get('page'));
+  const orders = useOrders(page);
+
+  if (orders.isPending) {
+    return (
+      <Stack gap="3" mt="10" role="status" aria-label="Loading your events">
+        {[0, 1, 2].map((i) => (
+          <Skeleton key={i} h="32" borderRadius="l3" />
+        ))}
+      </Stack>
+    );
+  }
+  if (orders.isError) {
+    return (
+      <Stack mt="10">
+        <LoadError
+          title="Your events could not be loaded"
+          error={orders.error}
+          onRetry={() => void orders.refetch()}
+          retrying={orders.isFetching}
+        />
+      </Stack>
+    );
+  }
+  if (orders.data.items.length === 0) {
+    return (
+      <EmptyState.Root
+        mt="10"
+        borderWidth="1px"
+        borderStyle="dashed"
+        borderColor="border.emphasized"
+        borderRadius="l3"
+        bg="bg.panel"
+      >
+        <EmptyState.Content>
+          <EmptyState.Indicator color="caramel.fg">
+            <CalendarIcon />
+          </EmptyState.Indicator>
+          <VStack textAlign="center" gap="2">
+            <EmptyState.Title fontFamily="heading" textStyle="2xl">
+              No events yet
+            </EmptyState.Title>
+            <EmptyState.Description color="fg.muted" maxW="md">
+              When you book a dessert for an event, it will appear here with its date, guests and
+              diets, payments and documents.
+            </EmptyState.Description>
+          </VStack>
+          <HStack gap="3" wrap="wrap" justify="center">
+            <Button asChild colorPalette="accent">
+              <RouterLink to={paths.menus.getHref()}>See the menus</RouterLink>
+            </Button>
+            <Button asChild variant="outline">
+              <RouterLink to={paths.howBookingWorks.getHref()}>See how booking works</RouterLink>
+            </Button>
+          </HStack>
+        </EmptyState.Content>
+      </EmptyState.Root>
+    );
+  }
+  const pages = pageCount(orders.data);
+  return (
+    <Stack gap="4" mt="10">
+      <Stack as="ul" listStyleType="none" gap="4" aria-label="Your events">
+        {orders.data.items.map((order) => (
+          <li key={order.id}>
+            <OrderCard order={order} />
+          </li>
+        ))}
+      </Stack>
+      {pages > 1 && (
+        <HStack as="nav" aria-label="Pages of events" justify="space-between">
+          {page > 1 ? (
+            <Button asChild variant="outline">
+              <RouterLink to={paths.myEvents.getHref(page - 1)}>Previous page</RouterLink>
+            </Button>
+          ) : (
+            <span />
+          )}
+          <Text color="fg.muted" textStyle="sm">
+            Page {page} of {pages}
+          </Text>
+          {page < pages ? (
+            <Button asChild variant="outline">
+              <RouterLink to={paths.myEvents.getHref(page + 1)}>Next page</RouterLink>
+            </Button>
+          ) : (
+            <span />
+          )}
+        </HStack>
+      )}
+    </Stack>
+  );
+}
 
 export function MyEventsRoute() {
   return (
@@ -12,42 +132,20 @@ export function MyEventsRoute() {
         <>
           <PageTitle>My events</PageTitle>
           <Container maxW="4xl" py={{ base: '10', md: '16' }}>
-            <Stack gap="2">
-              <Heading as="h1" fontSize={{ base: '4xl', md: '5xl' }} fontWeight="normal">
-                My events
-              </Heading>
-              <Text color="fg.muted">
-                Signed in as {user.name} ({user.email})
-              </Text>
-            </Stack>
-            <EmptyState.Root
-              mt="10"
-              borderWidth="1px"
-              borderStyle="dashed"
-              borderColor="border.emphasized"
-              borderRadius="l3"
-              bg="bg.panel"
-            >
-              <EmptyState.Content>
-                <EmptyState.Indicator color="caramel.fg">
-                  <CalendarIcon />
-                </EmptyState.Indicator>
-                <VStack textAlign="center" gap="2">
-                  <EmptyState.Title fontFamily="heading" textStyle="2xl">
-                    No events yet
-                  </EmptyState.Title>
-                  <EmptyState.Description color="fg.muted" maxW="md">
-                    When you book a dessert for an event, it will appear here with its date, guests
-                    and diets, payments and documents.
-                  </EmptyState.Description>
-                </VStack>
-                <Button asChild variant="outline">
-                  <RouterLink to={paths.howBookingWorks.getHref()}>
-                    See how booking works
-                  </RouterLink>
-                </Button>
-              </EmptyState.Content>
-            </EmptyState.Root>
+            <HStack justify="space-between" align="end" gap="4" wrap="wrap">
+              <Stack gap="2">
+                <Heading as="h1" fontSize={{ base: '4xl', md: '5xl' }} fontWeight="normal">
+                  My events
+                </Heading>
+                <Text color="fg.muted">
+                  Signed in as {user.name} ({user.email})
+                </Text>
+              </Stack>
+              <Button asChild variant="outline">
+                <RouterLink to={paths.menus.getHref()}>Book another event</RouterLink>
+              </Button>
+            </HStack>
+            <EventList />
           </Container>
         </>
       )}

@@ -19,6 +19,14 @@ describe('public pages', () => {
       'listitem',
     );
     expect(steps).toHaveLength(3);
+    // This season's menus, photo first, each with a way to book it.
+    const menus = screen.getByRole('region', { name: 'Menus to book' });
+    expect(
+      await within(menus).findByRole('article', { name: 'Midsummer Garden' }),
+    ).toBeInTheDocument();
+    expect(
+      within(menus).getByRole('link', { name: 'Book this menu: Orchard Table' }),
+    ).toHaveAttribute('href', '/book/menu-orchard/event');
   });
 
   it('Home still reads well when the studio card cannot be loaded', async () => {
@@ -53,12 +61,13 @@ describe('public pages', () => {
     );
   });
 
-  it('How booking works explains the four steps and that menus open shortly', async () => {
+  it('How booking works explains the four steps and leads to the menus and dates', async () => {
     renderApp('/how-booking-works');
     expect(
       await screen.findByRole('heading', { level: 1, name: 'How booking works' }),
     ).toBeInTheDocument();
-    expect(screen.getByText('Menus and online booking open shortly')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'See the menus' })).toHaveAttribute('href', '/menus');
+    expect(screen.getByRole('link', { name: 'See open dates' })).toHaveAttribute('href', '/dates');
     for (const step of [
       'Choose a menu',
       'Tell us the date and your guests',
@@ -71,7 +80,7 @@ describe('public pages', () => {
   });
 
   it('an unknown address shows the 404 page inside the layout', async () => {
-    renderApp('/menus/this-does-not-exist');
+    renderApp('/this-page-does-not-exist');
     expect(
       await screen.findByRole('heading', { level: 1, name: 'This page is not on the menu' }),
     ).toBeInTheDocument();

@@ -1,0 +1,23 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { Page } from '../../../lib/page';
+import { menuKeys } from './menu-keys';
+import type { PublicMenu } from './types';
+
+export const MENUS_PAGE_SIZE = 12;
+
+/** The active menus, a page at a time (`GET /api/menus`, public). */
+export function getMenus(page: number, pageSize = MENUS_PAGE_SIZE): Promise<Page<PublicMenu>> {
+  const query = new URLSearchParams({ page: String(page), pageSize: String(pageSize) });
+  return api.get<Page<PublicMenu>>(`/menus?${query.toString()}`, { auth: false });
+}
+
+export const menusQueryOptions = (page = 1, pageSize = MENUS_PAGE_SIZE) =>
+  queryOptions({
+    queryKey: menuKeys.list({ page, pageSize }),
+    queryFn: () => getMenus(page, pageSize),
+    staleTime: 5 * 60_000,
+  });
+
+export const useMenus = (page = 1, pageSize = MENUS_PAGE_SIZE) =>
+  useQuery(menusQueryOptions(page, pageSize));

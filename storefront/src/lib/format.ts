@@ -1,0 +1,65 @@
+import { formatIsoDate, formatMoney, isIsoDate, isoDayNumber, type IsoDate } from '@nappe/shared';
+
+/**
+ * How the storefront writes money, dates and counts. Money arrives as integer minor units and is
+ * only turned into text here, through the shared formatter (Intl.NumberFormat on an exact
+ * decimal string): the storefront never does arithmetic on prices.
+ */
+
+export const LOCALE = 'en-GB';
+
+export function money(minor: number, currency: string): string {
+  return formatMoney(minor, currency, LOCALE);
+}
+
+/** "Saturday 4 July 2026". */
+export function longDate(date: IsoDate): string {
+  return isIsoDate(date) ? formatIsoDate(date) : date;
+}
+
+const shortDateFormat = new Intl.DateTimeFormat(LOCALE, {
+  timeZone: 'UTC',
+  weekday: 'short',
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+});
+
+/** "Sat 4 Jul 2026". */
+export function shortDate(date: IsoDate): string {
+  if (!isIsoDate(date)) return date;
+  return shortDateFormat.format(isoDayNumber(date) * 86_400_000);
+}
+
+const instantFormat = new Intl.DateTimeFormat(LOCALE, {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  hour: '2-digit',
+  minute: '2-digit',
+});
+
+/** An instant from the API ("2026-06-01T09:30:00Z") on this device's clock: "1 Jun 2026, 11:30". */
+export function dateTime(instant: string): string {
+  const at = Date.parse(instant);
+  return Number.isNaN(at) ? instant : instantFormat.format(at);
+}
+
+export function plural(n: number, one: string, many = `${one}s`): string {
+  return `${n.toLocaleString(LOCALE)} ${n === 1 ? one : many}`;
+}
+
+/**
+ * A menu's lead days in words: "Book at least 10 days ahead", in weeks when they divide evenly
+ * ("2 weeks"), "Can be booked for today" when no notice is needed.
+ */
+export function leadTimeInWords(days: number): string {
+  if (days <= 0) return 'Can be booked for the same day';
+  if (days % 7 === 0) return `Book at least ${plural(days / 7, 'week')} ahead`;
+  return `Book at least ${plural(days, 'day')} ahead`;
+}
+
+/** "12 to 80 guests", or "Exactly 12 guests" when both limits agree. */
+export function guestRange(min: number, max: number): string {
+  return min === max ? `Exactly ${plural(min, 'guest')}` : `${min} to ${plural(max, 'guest')}`;
+}
