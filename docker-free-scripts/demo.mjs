@@ -13,6 +13,8 @@ import {
 } from './lib/system.mjs';
 
 const started = performance.now();
+// `npm run dev`: the same system with both apps served from source by Vite (edits show at once).
+const live = process.argv.includes('--live');
 const config = systemConfig();
 try {
   await assertPortsFree(Object.values(config.ports));
@@ -25,13 +27,13 @@ try {
 }
 
 if (process.env.NAPPE_SKIP_BUILD !== '1') {
-  console.log('Building shared, api, storefront and admin…');
-  buildAll();
+  console.log(live ? 'Building shared and api…' : 'Building shared, api, storefront and admin…');
+  buildAll({ live });
 }
 console.log(`Preparing the database at ${config.databasePath}…`);
 migrateAndSeed(config);
 
-const system = startSystem(config);
+const system = startSystem(config, { live });
 let stopping = false;
 const stop = () => {
   if (stopping) return;

@@ -64,9 +64,15 @@ function run(command, args, options = {}) {
   }
 }
 
-/** Builds shared, the API and both apps (production bundles). */
-export function buildAll() {
-  run('npm', ['run', 'build', '--silent']);
+/**
+ * Builds shared, the API and both apps (production bundles); `live`: shared and the API only.
+ * @param {{ live?: boolean }} [options]
+ */
+export function buildAll({ live = false } = {}) {
+  if (!live) return run('npm', ['run', 'build', '--silent']);
+  // Served from source, the apps need no bundle: build what the API runs.
+  run('npm', ['run', 'build', '--silent', '-w', 'shared']);
+  run('npm', ['run', 'build', '--silent', '-w', 'api']);
 }
 
 /**
@@ -114,23 +120,26 @@ export function migrateAndSeed(config) {
  * Starts every process. Returns the concurrently handle; `stop()` ends them all.
  * Output is prefixed with the process name; `quiet` drops it (the browser tests).
  * @param {SystemConfig} config
- * @param {{ quiet?: boolean, env?: Record<string, string> }} options
+ * `live` serves both apps from their sources with Vite's dev server (edits show at once)
+ * instead of the built bundles.
+ * @param {{ quiet?: boolean, live?: boolean, env?: Record<string, string> }} options
  */
-export function startSystem(config, { quiet = false, env = {} } = {}) {
+export function startSystem(config, { quiet = false, live = false, env = {} } = {}) {
   const sharedEnv = systemEnv(config, env);
   const vite = join(ROOT, 'node_modules', 'vite', 'bin', 'vite.js');
+  const serve = live ? '' : ' preview';
   const commands = [
     { name: 'api', command: 'node api/dist/main.js', env: sharedEnv, prefixColor: 'magenta' },
     {
       name: 'storefront',
-      command: `node ${vite} preview --port ${config.ports.storefront} --strictPort`,
+      command: `node ${vite}${serve} --port ${config.ports.storefront} --strictPort`,
       cwd: join(ROOT, 'storefront'),
       env: sharedEnv,
       prefixColor: 'yellow',
     },
     {
       name: 'admin',
-      command: `node ${vite} preview --port ${config.ports.admin} --strictPort`,
+      command: `node ${vite}${serve} --port ${config.ports.admin} --strictPort`,
       cwd: join(ROOT, 'admin'),
       env: sharedEnv,
       prefixColor: 'green',

@@ -41,6 +41,33 @@ export const paths = {
     path: '/kitchen/menus/:id',
     getHref: (id: string) => `/kitchen/menus/${encodeURIComponent(id)}`,
   },
+  orders: {
+    path: '/orders',
+    getHref: (query?: string) => (query ? `/orders?${query}` : '/orders'),
+  },
+  order: {
+    path: '/orders/:id',
+    getHref: (id: string) => `/orders/${encodeURIComponent(id)}`,
+  },
+  calendar: {
+    path: '/calendar',
+    getHref: (month?: string) => (month ? `/calendar?month=${month}` : '/calendar'),
+  },
+  allergyNotes: { path: '/allergy-notes', getHref: () => '/allergy-notes' },
+  orderAllergyNotes: {
+    path: '/allergy-notes/:orderId',
+    getHref: (orderId: string) => `/allergy-notes/${encodeURIComponent(orderId)}`,
+  },
+  briefing: {
+    path: '/allergy-notes/:orderId/briefing',
+    getHref: (orderId: string) => `/allergy-notes/${encodeURIComponent(orderId)}/briefing`,
+  },
+  prepPlan: { path: '/prep/plan', getHref: () => '/prep/plan' },
+  prepSchedule: { path: '/prep/schedule', getHref: () => '/prep/schedule' },
+  prepLabels: { path: '/prep/labels', getHref: () => '/prep/labels' },
+  insights: { path: '/insights', getHref: () => '/insights' },
+  settings: { path: '/studio/settings', getHref: () => '/studio/settings' },
+  acceptInvitation: { path: '/accept-invitation', getHref: () => '/accept-invitation' },
   signIn: {
     path: '/sign-in',
     getHref: (redirectTo?: string | null) => {

@@ -20,8 +20,8 @@ const CHEF = [Role.Chef] as const;
 
 export const NAV_SECTIONS: readonly NavSection[] = [
   { label: 'Today', roles: ALL_TEAM, to: paths.today.getHref() },
-  { label: 'Orders', roles: CHEF },
-  { label: 'Calendar', roles: CHEF },
+  { label: 'Orders', roles: CHEF, to: paths.orders.getHref() },
+  { label: 'Calendar', roles: CHEF, to: paths.calendar.getHref() },
   {
     label: 'Kitchen',
     roles: ALL_TEAM,
@@ -32,10 +32,25 @@ export const NAV_SECTIONS: readonly NavSection[] = [
       { label: 'Menus', to: paths.menus.getHref() },
     ],
   },
-  { label: 'Prep', roles: ALL_TEAM },
-  { label: 'Allergy notes', roles: ALL_TEAM },
-  { label: 'Studio', roles: CHEF, children: [{ label: 'Team', to: paths.team.getHref() }] },
-  { label: 'Insights', roles: CHEF },
+  {
+    label: 'Prep',
+    roles: ALL_TEAM,
+    children: [
+      { label: 'Plan', to: paths.prepPlan.getHref() },
+      { label: 'Schedule', to: paths.prepSchedule.getHref() },
+      { label: 'Labels', to: paths.prepLabels.getHref() },
+    ],
+  },
+  { label: 'Allergy notes', roles: ALL_TEAM, to: paths.allergyNotes.getHref() },
+  {
+    label: 'Studio',
+    roles: CHEF,
+    children: [
+      { label: 'Settings', to: paths.settings.getHref() },
+      { label: 'Team', to: paths.team.getHref() },
+    ],
+  },
+  { label: 'Insights', roles: CHEF, to: paths.insights.getHref() },
 ];
 
 /** The sections this role may open that exist today. */
