@@ -450,6 +450,7 @@ describe('GET /api/recipes/:id/mix-balance (21 CFR 135.110; Goff, Ice Cream Tech
       .set(bearer(staff))
       .expect(200);
     expect(res.body.classification.class).toBe('frozen_custard');
+    expect(res.body.style).toBe('ice_cream');
     expect(res.body.composition).toMatchObject({ milkFat: 12, msnf: 10, totalSolids: 40 });
     // Goff's sucrose band is 10–14 %: 15 % is above it.
     expect(res.body.bands.find((b: { measure: string }) => b.measure === 'sucrose')).toMatchObject({

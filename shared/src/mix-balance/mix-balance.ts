@@ -46,7 +46,15 @@ export interface MixComposition {
 }
 
 export type MixMeasure =
-  'milkFat' | 'msnf' | 'sucrose' | 'glucoseSyrupSolids' | 'totalSolids' | 'water' | 'pod' | 'pac';
+  | 'milkFat'
+  | 'msnf'
+  | 'sucrose'
+  | 'sugars'
+  | 'glucoseSyrupSolids'
+  | 'totalSolids'
+  | 'water'
+  | 'pod'
+  | 'pac';
 
 export interface MixBand {
   measure: MixMeasure;
@@ -95,6 +103,68 @@ export const ICE_CREAM_MIX_BANDS: readonly MixBand[] = [
   },
 ];
 
+/**
+ * Target bands for a sorbet (fruit, sugar and water; no milk). Common practice, no source: a
+ * sorbet carries about 25–32 % sugars, 28–34 % total solids, and is sweeter and softer than an
+ * ice cream at the same serving temperature (POD 20–28, PAC 26–34, serving at about −12 °C).
+ */
+export const SORBET_MIX_BANDS: readonly MixBand[] = [
+  { measure: 'sugars', label: 'Sugars', min: 25, max: 32, source: 'common practice, no source' },
+  {
+    measure: 'totalSolids',
+    label: 'Total solids',
+    min: 28,
+    max: 34,
+    source: 'common practice, no source',
+  },
+  { measure: 'water', label: 'Water', min: 66, max: 72, source: 'common practice, no source' },
+  {
+    measure: 'pod',
+    label: 'Sweetness (POD)',
+    min: 20,
+    max: 28,
+    source: 'common practice, no source',
+  },
+  {
+    measure: 'pac',
+    label: 'Freezing-point depression (PAC)',
+    min: 26,
+    max: 34,
+    source: 'common practice, no source (for serving at about −12 °C)',
+  },
+];
+
+/** Which set of bands a frozen mix is judged against. */
+export type MixStyle = 'ice_cream' | 'sorbet';
+
+/**
+ * Below these a mix carries too little milk to be judged as an ice cream: 21 CFR 135.140 asks a
+ * sherbet for 1–2 % milkfat and 2–5 % total milk solids (from memory), so a mix under 1 % milkfat
+ * and 2 % milk solids non-fat is a water ice or sorbet.
+ */
+export const SORBET_MAX_MILKFAT = 1;
+export const SORBET_MAX_MSNF = 2;
+
+/** Ice cream or sorbet, from the mix itself, with the reason in words. */
+export function mixStyleOf(mix: MixComposition): { style: MixStyle; reason: string } {
+  if (mix.milkFat < SORBET_MAX_MILKFAT && mix.msnf < SORBET_MAX_MSNF) {
+    return {
+      style: 'sorbet',
+      reason: `Milkfat ${mix.milkFat.toFixed(1)} % and milk solids non-fat ${mix.msnf.toFixed(1)} % are under ${SORBET_MAX_MILKFAT} % and ${SORBET_MAX_MSNF} %: judged as a sorbet.`,
+    };
+  }
+  return {
+    style: 'ice_cream',
+    reason: `Milkfat ${mix.milkFat.toFixed(1)} %, milk solids non-fat ${mix.msnf.toFixed(1)} %: judged as an ice cream.`,
+  };
+}
+
+/** The bands for each style. */
+export const MIX_BANDS_BY_STYLE: Readonly<Record<MixStyle, readonly MixBand[]>> = {
+  ice_cream: ICE_CREAM_MIX_BANDS,
+  sorbet: SORBET_MIX_BANDS,
+};
+
 const BAND_ADVICE: Record<MixMeasure, { low: string; high: string }> = {
   milkFat: {
     low: 'expect a coarser, icier texture',
@@ -102,6 +172,7 @@ const BAND_ADVICE: Record<MixMeasure, { low: string; high: string }> = {
   },
   msnf: { low: 'body will be thin', high: 'lactose may crystallise and feel sandy' },
   sucrose: { low: 'it will taste flat and freeze hard', high: 'it will be very sweet and soft' },
+  sugars: { low: 'it will freeze hard and icy', high: 'it will be very sweet and may not set' },
   glucoseSyrupSolids: { low: 'little effect', high: 'it may feel chewy' },
   totalSolids: { low: 'more water freezes to ice: icier', high: 'it may feel heavy or pasty' },
   water: { low: 'it may feel heavy or pasty', high: 'icier texture' },
@@ -213,6 +284,8 @@ function measureOf(mix: MixComposition, m: MixMeasure): number {
       return mix.msnf;
     case 'sucrose':
       return mix.sugarsByKind.sucrose ?? 0;
+    case 'sugars':
+      return mix.sugars;
     case 'glucoseSyrupSolids':
       return (
         (mix.sugarsByKind.glucose_syrup_de40 ?? 0) + (mix.sugarsByKind.glucose_syrup_de60 ?? 0)
@@ -419,6 +492,9 @@ export interface MixBalance {
   recipeId: string;
   name: string;
   composition: MixComposition;
+  /** The style the bands are for, from the mix (or `custom` when the caller gave its own bands). */
+  style: MixStyle | 'custom';
+  styleReason: string;
   bands: BandCheck[];
   warnings: string[];
   classification: CfrClassification;
@@ -441,7 +517,10 @@ export function computeMixBalance(
     evaporatedWaterG: Math.max(0, input - recipe.yieldG),
     recipeName: recipe.name,
   });
-  const bands = checkBands(composition, options.bands);
+  const judged = mixStyleOf(composition);
+  const style = options.bands ? 'custom' : judged.style;
+  const styleReason = options.bands ? 'Checked against the bands given.' : judged.reason;
+  const bands = checkBands(composition, options.bands ?? MIX_BANDS_BY_STYLE[judged.style]);
   const warnings = bands.map(warningFor).filter((w): w is string => w !== null);
   if (input - recipe.yieldG > 0.5) {
     warnings.push(
@@ -452,6 +531,8 @@ export function computeMixBalance(
     recipeId: recipe.id,
     name: recipe.name,
     composition,
+    style,
+    styleReason,
     bands,
     warnings,
     classification: classifyFrozenDessert(composition, options),

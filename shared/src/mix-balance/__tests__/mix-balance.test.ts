@@ -13,7 +13,10 @@ import {
   checkBands,
   classifyFrozenDessert,
   computeMixBalance,
+  ICE_CREAM_MIX_BANDS,
   mixFromIngredients,
+  mixStyleOf,
+  SORBET_MIX_BANDS,
   type MixComposition,
 } from '../mix-balance.js';
 import {
@@ -164,6 +167,58 @@ describe("Goff's formulation table, reproduced from USDA cream and milk", () => 
       expect(goff.length).toBeGreaterThanOrEqual(6);
       expect(goff.filter((b) => b.status !== 'within')).toEqual([]);
     }
+  });
+});
+
+describe('ice cream or sorbet: which bands a mix is judged against', () => {
+  const water = withComposition('water', { water: 100, fat: 0 });
+
+  it("every row of Goff's formulation table is judged as an ice cream", () => {
+    // Goff, Ice Cream Technology e-Book, ch. 16: 10–16 % milkfat, 9.5–11 % MSNF.
+    const rows: Array<[number, number]> = [
+      [10, 11],
+      [12, 10.5],
+      [14, 10],
+      [16, 9.5],
+    ];
+    for (const [fat, msnf] of rows) {
+      expect(mixStyleOf({ milkFat: fat, msnf } as MixComposition).style).toBe('ice_cream');
+    }
+  });
+
+  it('a sherbet’s 1 % milkfat and 2 % milk solids (21 CFR 135.140, from memory) are the edge', () => {
+    expect(mixStyleOf({ milkFat: 0.99, msnf: 1.99 } as MixComposition).style).toBe('sorbet');
+    expect(mixStyleOf({ milkFat: 1, msnf: 1.5 } as MixComposition).style).toBe('ice_cream');
+    expect(mixStyleOf({ milkFat: 0.5, msnf: 2 } as MixComposition).style).toBe('ice_cream');
+  });
+
+  it('a syrup of 270 g sugar (FDC 169655) in 730 g water: a sorbet, sugars in band, solids just under', () => {
+    const idx = createKitchenIndex({
+      ingredients: [sugar, water],
+      recipes: [recipe('syrup', [line('sugar', 270), line('water', 730)], { yieldG: 1000 })],
+    });
+    const r = computeMixBalance(idx, 'syrup');
+    expect(r.style).toBe('sorbet');
+    expect(r.styleReason).toMatch(/Milkfat 0\.0 % and milk solids non-fat 0\.0 %/);
+    expect(r.bands.map((b) => b.measure)).toEqual(SORBET_MIX_BANDS.map((b) => b.measure));
+    const by = Object.fromEntries(r.bands.map((b) => [b.measure, b]));
+    // 270 × 99.98 % = 269.95 g sucrose per kg: 27.0 % sugars; POD and PAC 27 (sucrose = 100).
+    expect(by.sugars!.value).toBeCloseTo(27, 1);
+    expect(by.sugars!.status).toBe('within'); // 25–32 %, common practice, no source
+    expect(by.totalSolids!.status).toBe('below'); // 28–34 %
+    expect(by.pac!.status).toBe('within'); // 26–34
+    expect(r.warnings.join(' ')).toMatch(/Total solids 27\.0 % is below the 28–34 % band/);
+  });
+
+  it('a custard of milk, cream and sugar keeps the ice-cream bands', () => {
+    const idx = createKitchenIndex({
+      ingredients: [milk, cream, sugar],
+      recipes: [recipe('base', [line('milk', 600), line('cream', 250), line('sugar', 150)])],
+    });
+    const r = computeMixBalance(idx, 'base');
+    expect(r.style).toBe('ice_cream');
+    expect(r.bands.map((b) => b.measure)).toContain('milkFat');
+    expect(ICE_CREAM_MIX_BANDS.map((b) => b.measure)).not.toContain('sugars');
   });
 });
 

@@ -89,16 +89,12 @@ export function MixBalancePanel({ mix }: { mix: MixBalance }) {
           <BandBar key={check.measure} check={check} />
         ))}
       </Stack>
-      {c.milkFat < 1 && c.msnf < 1 && (
-        <Text textStyle="sm">
-          No milk in this mix (a sorbet): the milkfat and milk-solids bands are for ice cream and do
-          not apply; judge it on sugars, solids, POD and PAC.
-        </Text>
-      )}
+      <Text textStyle="sm">{mix.styleReason}</Text>
       <Text textStyle="xs" color="fg.muted">
-        Bands: milkfat, milk solids, sugars and solids from Goff’s ice-cream formulation ranges; POD
-        and PAC common practice for serving at about −12 °C. POD and PAC are grams of sucrose
-        equivalent per 100 g of mix.
+        {mix.style === 'sorbet'
+          ? 'Sorbet bands (sugars, solids, water, POD, PAC) are common practice for serving at about −12 °C.'
+          : 'Bands: milkfat, milk solids, sugars and solids from Goff’s ice-cream formulation ranges; POD and PAC common practice for serving at about −12 °C.'}{' '}
+        POD and PAC are grams of sucrose equivalent per 100 g of mix.
       </Text>
       {mix.warnings.length > 0 && (
         <List.Root ps="4" gap="1" textStyle="sm">
