@@ -1,4 +1,5 @@
 import { createSystem, defaultBaseConfig, defineConfig } from '@chakra-ui/react';
+import { semanticTokens, tokens } from '@nappe/shared/brand';
 import {
   alertSlotRecipe as chakraAlert,
   badgeRecipe,
@@ -48,8 +49,6 @@ import { alertSlotRecipe } from './recipes/alert';
 import { buttonRecipe } from './recipes/button';
 import { headingRecipe } from './recipes/heading';
 import { inputRecipe } from './recipes/input';
-import { semanticTokens } from './semantic-tokens';
-import { tokens } from './tokens';
 
 /**
  * Chakra's base (utilities, conditions) plus only the recipes these screens use: the full

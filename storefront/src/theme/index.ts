@@ -1,4 +1,5 @@
 import { createSystem, defaultBaseConfig, defineConfig } from '@chakra-ui/react';
+import { semanticTokens, tokens } from '@nappe/shared/brand';
 import {
   alertSlotRecipe as chakraAlert,
   animationStyles,
@@ -46,8 +47,6 @@ import { headingRecipe } from './recipes/heading';
 import { inputRecipe } from './recipes/input';
 import { nativeSelectSlotRecipe } from './recipes/native-select';
 import { textareaRecipe } from './recipes/textarea';
-import { semanticTokens } from './semantic-tokens';
-import { tokens } from './tokens';
 
 /**
  * Chakra's base (utilities, conditions) plus only the recipes these screens use: the full

@@ -1,5 +1,3 @@
-import { defineTokens } from '@chakra-ui/react';
-
 /**
  * Nappe's palette. The anchors come from the design card: aubergine ink #2B1E2F (ink.900),
  * cream paper #FBF6EE (cream.100), pistachio #8FA36B (pistachio.500), caramel #C2813A
@@ -97,7 +95,8 @@ function scale(name: PaletteName) {
   );
 }
 
-export const tokens = defineTokens({
+/** Design tokens in Chakra's token format (`{ value }`): plain data both apps' themes take. */
+export const tokens = {
   colors: {
     ink: scale('ink'),
     cream: scale('cream'),
@@ -115,4 +114,4 @@ export const tokens = defineTokens({
     l2: { value: '0.5rem' },
     l3: { value: '0.75rem' },
   },
-});
+};

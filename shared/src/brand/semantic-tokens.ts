@@ -1,5 +1,4 @@
-import { defineSemanticTokens } from '@chakra-ui/react';
-import type { PaletteName, Step } from './tokens';
+import type { PaletteName, Step } from './tokens.js';
 
 const ref = (name: PaletteName, step: Step) => ({ value: `{colors.${name}.${step}}` });
 
@@ -131,9 +130,9 @@ export const semanticColors = {
   }),
 } as const;
 
-export const semanticTokens = defineSemanticTokens({
+export const semanticTokens = {
   colors: semanticColors,
   shadows: {
     card: { value: '0 1px 2px rgba(43, 30, 47, 0.06), 0 8px 24px rgba(43, 30, 47, 0.06)' },
   },
-});
+};

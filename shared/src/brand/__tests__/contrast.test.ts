@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { semanticColors } from './semantic-tokens';
-import { palette, type PaletteName } from './tokens';
+import { semanticColors } from '../semantic-tokens.js';
+import { palette, type PaletteName } from '../tokens.js';
 
 /** Relative luminance, WCAG 2.2 "Definitions: relative luminance" (sRGB, 0.04045 threshold). */
 function luminance(hex: string): number {
