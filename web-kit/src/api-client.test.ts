@@ -1,8 +1,32 @@
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it, vi } from 'vitest';
-import { clientUser, sessionFor } from '../testing/fixtures';
-import { server } from '../testing/server';
+import { setupServer } from 'msw/node';
+import { Role, type AuthSession, type AuthUser } from '@nappe/shared';
+import { afterAll, afterEach, beforeAll } from 'vitest';
 import { ApiError, createApiClient, fileNameFrom, parseRetryAfter } from './api-client';
+
+// Nobody signed in unless a test says otherwise: the refresh cookie is refused.
+const server = setupServer(
+  http.post('/api/auth/refresh', () =>
+    HttpResponse.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 }),
+  ),
+);
+beforeAll(() => server.listen({ onUnhandledRequest: 'error' }));
+afterEach(() => server.resetHandlers());
+afterAll(() => server.close());
+
+const clientUser: AuthUser = {
+  id: 'user-client',
+  email: 'client@example.test',
+  name: 'Client Person',
+  role: Role.Client,
+};
+const sessionFor = (user: AuthUser, accessToken: string): AuthSession => ({
+  accessToken,
+  tokenType: 'Bearer',
+  expiresIn: 900,
+  user,
+});
 
 const OLD = 'expired-token';
 const NEW = 'fresh-token';
@@ -32,7 +56,7 @@ function expiredTokenApi() {
 
 describe('api client', () => {
   it('attaches the Bearer token and keeps it in memory only', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     const { seen } = expiredTokenApi();
     client.setSession(sessionFor(clientUser, NEW));
 
@@ -43,7 +67,7 @@ describe('api client', () => {
   });
 
   it('on a 401 refreshes once and retries the request', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     const api = expiredTokenApi();
     client.setSession(sessionFor(clientUser, OLD));
 
@@ -54,7 +78,7 @@ describe('api client', () => {
   });
 
   it('shares one refresh between concurrent 401s (single flight)', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     const api = expiredTokenApi();
     client.setSession(sessionFor(clientUser, OLD));
 
@@ -72,7 +96,7 @@ describe('api client', () => {
   });
 
   it('retries with the newer token, without a second refresh, when one landed meanwhile', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     let refreshes = 0;
     const seen: (string | null)[] = [];
     server.use(
@@ -101,7 +125,7 @@ describe('api client', () => {
   });
 
   it('ends the session when the refresh is refused, and says so', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     const listener = vi.fn();
     client.subscribe(listener);
     server.use(
@@ -121,7 +145,7 @@ describe('api client', () => {
   });
 
   it('never refreshes for the sign-in endpoints: their 401 is an answer', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     let refreshes = 0;
     server.use(
       http.post('/api/auth/refresh', () => {
@@ -145,7 +169,7 @@ describe('api client', () => {
   });
 
   it('restores a session from the cookie on start, or reports nobody signed in', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     expect(await client.restoreSession()).toBeNull(); // default handler: 401
 
     server.use(
@@ -156,7 +180,7 @@ describe('api client', () => {
   });
 
   it('turns Nest error bodies into messages, lists included', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     server.use(
       http.post('/api/auth/register', () =>
         HttpResponse.json(
@@ -180,14 +204,14 @@ describe('api client', () => {
   });
 
   it('answers a 204 with no body', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     server.use(http.post('/api/auth/logout', () => new HttpResponse(null, { status: 204 })));
     client.setSession(sessionFor(clientUser, NEW));
     await expect(client.post('/auth/logout')).resolves.toBeUndefined();
   });
 
   it('reports an unreachable server as status 0 with a readable message', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     server.use(http.get('/api/studio', () => HttpResponse.error()));
     const error = (await client.get('/studio').catch((e: unknown) => e)) as ApiError;
     expect(error.status).toBe(0);
@@ -197,7 +221,7 @@ describe('api client', () => {
 
 describe('extra headers and files', () => {
   it('sends the headers it is given, such as an idempotency key', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     let key: string | null = null;
     server.use(
       http.post('/api/orders', ({ request }) => {
@@ -211,7 +235,7 @@ describe('extra headers and files', () => {
   });
 
   it('downloads a file with the Bearer token, refreshing it first when it has expired', async () => {
-    const client = createApiClient();
+    const client = createApiClient({ basePath: '/api' });
     server.use(
       http.get('/api/orders/order-1/event.ics', ({ request }) =>
         request.headers.get('Authorization') === `Bearer ${NEW}`
@@ -230,6 +254,47 @@ describe('extra headers and files', () => {
     expect(file.fileName).toBe('event.ics');
     expect(file.blob.type).toBe('text/calendar');
     expect(await file.blob.text()).toBe('BEGIN:VCALENDAR');
+  });
+});
+
+describe('uploads (XMLHttpRequest, for progress)', () => {
+  it('sends the form with the Bearer token, refreshing it once on a 401', async () => {
+    const seen: (string | null)[] = [];
+    server.use(
+      http.post('/api/desserts/d1/photo', async ({ request }) => {
+        const auth = request.headers.get('Authorization');
+        seen.push(auth);
+        if (auth !== `Bearer ${NEW}`) {
+          return HttpResponse.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 });
+        }
+        const form = await request.formData();
+        return HttpResponse.json({ received: form.has('file') }, { status: 201 });
+      }),
+      http.post('/api/auth/refresh', () => HttpResponse.json(sessionFor(clientUser, NEW))),
+    );
+    const client = createApiClient({ basePath: '/api' });
+    client.setSession(sessionFor(clientUser, OLD));
+    const form = new FormData();
+    form.append('file', new File([new Uint8Array(2048)], 'plate.webp', { type: 'image/webp' }));
+    await expect(client.upload('/desserts/d1/photo', form)).resolves.toEqual({ received: true });
+    expect(seen).toEqual([`Bearer ${OLD}`, `Bearer ${NEW}`]);
+    expect(client.getAccessToken()).toBe(NEW);
+  });
+
+  it('turns a 413 without a JSON body into words a person can act on', async () => {
+    server.use(
+      http.post('/api/desserts/d1/photo', () => new HttpResponse('Too large', { status: 413 })),
+    );
+    const client = createApiClient({ basePath: '/api' });
+    client.setSession(sessionFor(clientUser, NEW));
+    const error = await client
+      .upload('/desserts/d1/photo', new FormData())
+      .catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(ApiError);
+    expect((error as ApiError).status).toBe(413);
+    expect((error as ApiError).messages).toEqual([
+      'The file is too large for the server. Send a smaller one.',
+    ]);
   });
 });
 
