@@ -44,6 +44,10 @@ export default tseslint.config(
     },
   },
   {
+    files: ['web-kit/**/*.ts'],
+    languageOptions: { globals: globals.browser },
+  },
+  {
     files: ['storefront/**/*.{ts,tsx}', 'admin/**/*.{ts,tsx}'],
     plugins: { 'react-hooks': reactHooks },
     languageOptions: { globals: globals.browser },
