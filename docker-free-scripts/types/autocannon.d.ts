@@ -14,7 +14,10 @@ declare module 'autocannon' {
       path?: string;
       headers?: Record<string, string>;
       body?: string;
-      setupRequest?: (request: Record<string, unknown>, context: Record<string, unknown>) => unknown;
+      setupRequest?: (
+        request: Record<string, unknown>,
+        context: Record<string, unknown>,
+      ) => unknown;
       onResponse?: (status: number, body: string, context: Record<string, unknown>) => void;
     }>;
   }
@@ -27,6 +30,8 @@ declare module 'autocannon' {
     total: number;
   }
   export interface Result {
+    /** Seconds the run lasted. */
+    duration: number;
     requests: Histogram;
     latency: Histogram;
     throughput: Histogram;
