@@ -5,6 +5,7 @@ import { AllergyNotesModule } from './allergy-notes/allergy-notes.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { ShutdownState } from './common/shutdown.js';
 import { PrepModule } from './prep/prep.module.js';
+import { PrivacyModule } from './privacy/privacy.module.js';
 import { ClockModule } from './common/clock.js';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard.js';
 import { RolesGuard } from './auth/guards/roles.guard.js';
@@ -40,6 +41,7 @@ import { InsightsModule } from './insights/insights.module.js';
     InsightsModule,
     AllergyNotesModule,
     PrepModule,
+    PrivacyModule,
   ],
   controllers: [HealthController],
   providers: [

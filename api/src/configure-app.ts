@@ -26,7 +26,11 @@ const MULTIPART_ROUTES = [/^\/api\/(desserts|menus)\/[^/]+\/photo$/];
  * Everything that makes the app the app, shared by `main.ts` and the e2e tests so both run
  * the same middleware in the same order.
  */
-export function configureApp(app: NestExpressApplication, env: Env): INestApplication {
+export function configureApp(
+  app: NestExpressApplication,
+  env: Env,
+  options: { logStream?: { write(line: string): void } } = {},
+): INestApplication {
   app.use(app.get(ShutdownState).middleware);
   app.setGlobalPrefix('api');
   app.set('trust proxy', false);
@@ -37,21 +41,25 @@ export function configureApp(app: NestExpressApplication, env: Env): INestApplic
   app.useBodyParser('urlencoded', { limit: JSON_BODY_LIMIT, extended: false });
 
   app.use(
-    pinoHttp({
-      level: env.LOG_LEVEL,
-      // Log the request line and outcome only: never headers, cookies, tokens or bodies
-      // (bodies can hold guests' health data).
-      serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({
-          id: req.id,
-          method: req.method,
-          path: req.url.split('?')[0],
-        }),
-        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+    pinoHttp(
+      {
+        level: env.LOG_LEVEL,
+        // Log the request line and outcome only: never headers, cookies, tokens or bodies
+        // (bodies can hold guests' health data).
+        serializers: {
+          req: (req: { id: unknown; method: string; url: string }) => ({
+            id: req.id,
+            method: req.method,
+            path: req.url.split('?')[0],
+          }),
+          res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+        },
+        customLogLevel: (_req, res, err) =>
+          err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       },
-      customLogLevel: (_req, res, err) =>
-        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
-    }),
+      // Standard output unless a test captures the log lines (to check no guest data reaches them).
+      options.logStream,
+    ),
   );
 
   const isProduction = env.NODE_ENV === 'production';

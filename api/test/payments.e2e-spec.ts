@@ -98,7 +98,8 @@ describe('checkout → payment page → webhook (Stripe docs: fulfil on checkout
     const co = await checkout(token, id).expect(200);
     expect(co.body).toMatchObject({ amountMinor: 7200, currency: 'EUR' });
     expect(co.body.checkoutUrl).toBe(`http://localhost:12111/pay/${co.body.sessionId}`);
-    expect(co.body.expiresAt).toBe('2026-03-06T09:30:00.000Z');
+    // 30 minutes' hold and a minute of margin for the payment service's own 30-minute minimum.
+    expect(co.body.expiresAt).toBe('2026-03-06T09:31:00.000Z');
 
     const session = pay.fake.state.checkoutSessions.get(co.body.sessionId)!;
     expect(session).toMatchObject({
@@ -108,7 +109,7 @@ describe('checkout → payment page → webhook (Stripe docs: fulfil on checkout
       metadata: { orderId: id, plan: 'deposit' },
       success_url: `http://localhost:5173/my-events/${id}/booked?session_id={CHECKOUT_SESSION_ID}`,
       cancel_url: `http://localhost:5173/my-events/${id}`,
-      expires_at: Date.parse('2026-03-06T09:30:00Z') / 1000,
+      expires_at: Date.parse('2026-03-06T09:31:00Z') / 1000,
     });
     const key = [...pay.fake.state.idempotencyKeys.keys()].find((k) =>
       k.startsWith(`order:${id}:`),

@@ -265,6 +265,22 @@ describe('prep schedule, ticks and labels', () => {
     expect(text.toLowerCase()).toContain('almond');
   });
 
+  it('prints a frozen label’s storage temperature with its minus sign', async () => {
+    const plan = await getPlan(d.chef);
+    const run = plan.schedule.runs.find((r) => r.storage === 'frozen')!;
+    const pdf = await d.t.http
+      .get(`/api/prep/labels.pdf?date=${run.productionDate}`)
+      .set(bearer(d.staff))
+      .buffer(true)
+      .parse(binary)
+      .expect(200);
+    const text = pdfText(pdf.body as Buffer).join(' ');
+    // Frozen storage at −18 °C (0 °F) or below: USDA FSIS, "Freezing and Food Safety". The
+    // standard PDF fonts have no U+2212, so it is printed as a hyphen-minus, never as "?".
+    expect(text).toMatch(/Keep frozen at -18 °C or below/);
+    expect(text).not.toContain('?18');
+  });
+
   it('refuses clients and anonymous callers, and staff writes to the kitchen', async () => {
     await d.t.http.get('/api/prep/plan').expect(401);
     await d.t.http.get('/api/prep/plan').set(bearer(d.client)).expect(403);

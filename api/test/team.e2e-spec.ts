@@ -291,6 +291,26 @@ describe('the last chef', () => {
   });
 });
 
+describe('removing oneself', () => {
+  it('a chef cannot remove their own account (409), even with a second chef; the other chef can', async () => {
+    const solo = await createBookingApp();
+    try {
+      const first = await signedIn(solo.t, Role.Chef);
+      const second = await signedIn(solo.t, Role.Chef);
+      const res = await solo.t.http
+        .delete(`/api/users/${first.user.id}`)
+        .set(bearer(first.token))
+        .expect(409);
+      expect((res.body as { message: string }).message).toMatch(/your own account/);
+      await solo.t.http.get('/api/auth/me').set(bearer(first.token)).expect(200);
+      await solo.t.http.delete(`/api/users/${first.user.id}`).set(bearer(second.token)).expect(204);
+      await solo.t.http.get('/api/auth/me').set(bearer(first.token)).expect(401);
+    } finally {
+      await solo.t.close();
+    }
+  });
+});
+
 describe('accept-invitation throttling (as sign-in, OWASP ASVS 5.0 V6.3.1)', () => {
   it('answers 429 with Retry-After after too many attempts from one address', async () => {
     const statuses: number[] = [];

@@ -20,6 +20,7 @@ export * from './mix-balance/mix-balance.js';
 export * from './availability/iso-date.js';
 export * from './availability/availability.js';
 export * from './settings/studio-settings.js';
+export * from './settings/studio-settings-body.js';
 export * from './quote/money.js';
 export * from './quote/quote.js';
 export * from './orders/booking-errors.js';

@@ -8,7 +8,8 @@ import {
   Put,
   StreamableFile,
 } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiGoneResponse, ApiTags } from '@nestjs/swagger';
+import { GUEST_DETAILS_GONE } from '../privacy/guest-retention.js';
 import { Role } from '@nappe/shared';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
@@ -30,12 +31,14 @@ export class AllergyNotesController {
 
   @Roles(Role.Client, Role.Chef, Role.Staff)
   @Get(':id/allergy-notes')
+  @ApiGoneResponse(GUEST_DETAILS_GONE)
   get(@CurrentUser() user: Principal, @Param('id') id: string): Promise<AllergyNotes> {
     return this.notes.notes(user, id);
   }
 
   @Roles(Role.Chef)
   @Put(':id/guests/:guestId/substitutions/:dessertId')
+  @ApiGoneResponse(GUEST_DETAILS_GONE)
   put(
     @CurrentUser() user: Principal,
     @Param('id') id: string,
@@ -48,6 +51,7 @@ export class AllergyNotesController {
 
   @Roles(Role.Chef)
   @Delete(':id/guests/:guestId/substitutions/:dessertId')
+  @ApiGoneResponse(GUEST_DETAILS_GONE)
   remove(
     @CurrentUser() user: Principal,
     @Param('id') id: string,
@@ -59,12 +63,14 @@ export class AllergyNotesController {
 
   @Roles(Role.Chef, Role.Staff)
   @Get(':id/briefing')
+  @ApiGoneResponse(GUEST_DETAILS_GONE)
   briefing(@CurrentUser() user: Principal, @Param('id') id: string): Promise<Briefing> {
     return this.notes.briefing(user, id);
   }
 
   @Roles(Role.Chef, Role.Staff)
   @Get(':id/briefing.pdf')
+  @ApiGoneResponse(GUEST_DETAILS_GONE)
   async briefingPdf(
     @CurrentUser() user: Principal,
     @Param('id') id: string,

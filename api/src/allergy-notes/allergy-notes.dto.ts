@@ -21,6 +21,17 @@ export const substitutionBodySchema = z
   });
 export type SubstitutionBody = z.output<typeof substitutionBodySchema>;
 
+/** GET /allergy-notes/counts?orderIds=a,b,c — the orders of a list screen, at most 100. */
+export const allergyCountsQuerySchema = z
+  .string({ error: 'Give the orders to count as orderIds=id1,id2,…' })
+  .transform((raw) => [...new Set(raw.split(',').map((id) => id.trim()))].filter((id) => id !== ''))
+  .pipe(
+    z
+      .array(z.string().max(64, 'An order id has at most 64 characters.'))
+      .min(1, 'Give at least one order id.')
+      .max(100, 'Ask for at most 100 orders at once.'),
+  );
+
 /** POST /orders/:id/confirm — the reason, and the chef's reason for confirming despite a warning. */
 export const confirmBodySchema = orderReasonSchema.extend({
   overrideReason: z

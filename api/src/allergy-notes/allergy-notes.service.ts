@@ -8,6 +8,7 @@ import {
 import {
   checkGuestAgainstDessert,
   checkOrderLeadTime,
+  dateInTimeZone,
   isKitchenError,
   OrderStatus,
   Role,
@@ -22,13 +23,16 @@ import {
   KitchenCatalogueService,
 } from '../kitchen/catalogue/kitchen-catalogue.service.js';
 import { OrderGuestEntity } from '../orders/entities/order-guest.entity.js';
-import type { OrderEntity } from '../orders/entities/order.entity.js';
+import { OrderEntity } from '../orders/entities/order.entity.js';
 import { actorOf, orderFor, recordEvent } from '../orders/order-records.js';
+import { assertGuestDetailsHeld } from '../privacy/guest-retention.js';
 import { loadStudio } from '../studio/booking-settings.js';
+import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import type { SubstitutionBody } from './allergy-notes.dto.js';
 import type {
   AccessLogEntry,
+  AllergyCounts,
   AllergyNotes,
   Briefing,
   GuestNote,
@@ -81,6 +85,21 @@ export class AllergyNotesService {
     return computeView(() => allergyNotesOf(index, order, guests, subs));
   }
 
+  /**
+   * 410 Gone once the order's guest details are removed — past the studio's retention date, or
+   * erased with the client's account — for the client, the chef and the staff alike.
+   */
+  private async assertGuestDetailsHeld(m: EntityManager, order: OrderEntity): Promise<void> {
+    const studio = await m.findOneByOrFail(StudioSettings, { id: 1 });
+    await assertGuestDetailsHeld(
+      m,
+      order,
+      studio.guestDataRetentionDays,
+      dateInTimeZone(this.clock.now(), studio.timeZone),
+      studio.timeZone,
+    );
+  }
+
   /** Records an opening by the chef or staff (a client reading their own data is not logged). */
   async logAccess(
     m: EntityManager,
@@ -102,6 +121,7 @@ export class AllergyNotesService {
   notes(principal: Principal, id: string): Promise<AllergyNotes> {
     return this.dataSource.transaction(async (m) => {
       const order = await orderFor(m, principal, id);
+      await this.assertGuestDetailsHeld(m, order);
       const notes = await this.notesIn(m, order);
       await this.logAccess(m, principal, order.id, 'allergy_notes');
       return notes;
@@ -111,6 +131,7 @@ export class AllergyNotesService {
   briefing(principal: Principal, id: string, what: GuestDataView = 'briefing'): Promise<Briefing> {
     return this.dataSource.transaction(async (m) => {
       const order = await orderFor(m, principal, id);
+      await this.assertGuestDetailsHeld(m, order);
       const briefing = briefingOf(await this.notesIn(m, order), order);
       await this.logAccess(m, principal, order.id, what);
       return briefing;
@@ -126,6 +147,55 @@ export class AllergyNotesService {
     const studio = await this.dataSource.transaction((m) => loadStudio(m));
     const content = await renderBriefingPdf(briefing, studio.row.name);
     return { filename: `allergy-briefing-${briefing.reference}.pdf`, content };
+  }
+
+  /**
+   * Anonymous counts per order for the studio's list of events, in the order asked; unknown ids
+   * are left out. Only numbers leave the server (no guest's name, allergens or notes), so this
+   * is not logged as an opening of guest data. A menu whose recipes cannot be checked gives
+   * that order a `problem` rather than failing the whole list.
+   */
+  counts(orderIds: readonly string[]): Promise<AllergyCounts[]> {
+    return this.dataSource.transaction(async (m) => {
+      const orders = await m.find(OrderEntity, { where: { id: In([...orderIds]) } });
+      if (orders.length === 0) return [];
+      const ids = orders.map((o) => o.id);
+      const guests = await m.find(OrderGuestEntity, { where: { orderId: In(ids) } });
+      const subs = await m.find(OrderSubstitutionEntity, { where: { orderId: In(ids) } });
+      const { index } = await this.catalogue.load(m);
+      const byId = new Map(orders.map((o) => [o.id, o]));
+      return orderIds.flatMap((id): AllergyCounts[] => {
+        const order = byId.get(id);
+        if (!order) return [];
+        const own = guests.filter((g) => g.orderId === id);
+        const ownSubs = subs.filter((s) => s.orderId === id);
+        const counts: AllergyCounts = {
+          orderId: id,
+          guestsWithRequirements: own.filter(
+            (g) => g.allergens.length > 0 || g.diets.length > 0 || !!g.notes?.trim(),
+          ).length,
+          unresolvedPlates: 0,
+          unresolvedGuests: 0,
+          substitutions: 0,
+          advisoryCount: 0,
+          problem: null,
+        };
+        try {
+          const notes = allergyNotesOf(index, order, own, ownSubs);
+          counts.unresolvedPlates = notes.unresolved.length;
+          counts.unresolvedGuests = new Set(notes.unresolved.map((u) => u.guestId)).size;
+          counts.substitutions = notes.guests.reduce(
+            (n, g) => n + g.plates.filter((p) => p.substitution !== null).length,
+            0,
+          );
+          counts.advisoryCount = notes.advisoryCount;
+        } catch (error) {
+          if (!isKitchenError(error)) throw error;
+          counts.problem = error.message;
+        }
+        return [counts];
+      });
+    });
   }
 
   accessLog(principal: Principal, id: string): Promise<AccessLogEntry[]> {
@@ -164,6 +234,7 @@ export class AllergyNotesService {
       if (!OPEN.has(order.status)) {
         throw conflict('This booking is closed; its plates can no longer change.');
       }
+      await this.assertGuestDetailsHeld(m, order);
       const guest = await m.findOneBy(OrderGuestEntity, { orderId: order.id, position: guestId });
       if (!guest) throw new NotFoundException('This booking has no guest with that id.');
       const { index } = await this.catalogue.load(m);
@@ -226,6 +297,7 @@ export class AllergyNotesService {
       if (!OPEN.has(order.status)) {
         throw conflict('This booking is closed; its plates can no longer change.');
       }
+      await this.assertGuestDetailsHeld(m, order);
       const guest = await m.findOneBy(OrderGuestEntity, { orderId: order.id, position: guestId });
       if (!guest) throw new NotFoundException('This booking has no guest with that id.');
       const result = await m.delete(OrderSubstitutionEntity, {

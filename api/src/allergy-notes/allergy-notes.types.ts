@@ -95,3 +95,22 @@ export interface AccessLogEntry {
   role: string;
   what: string;
 }
+
+/**
+ * Anonymous counts of one order's allergy notes, for the list of events: no guest's name,
+ * allergens or notes, so reading them is not an opening of health data (not logged).
+ */
+export interface AllergyCounts {
+  orderId: string;
+  /** Guests who stated an allergen, a diet or a note. */
+  guestsWithRequirements: number;
+  /** Guest plates that still conflict on the plate the guest will get. */
+  unresolvedPlates: number;
+  /** Guests with at least one such plate. */
+  unresolvedGuests: number;
+  /** Plates the chef changed for a guest (recorded substitutions). */
+  substitutions: number;
+  advisoryCount: number;
+  /** Why the plates could not be checked (a recipe the menu needs is broken), else null. */
+  problem: string | null;
+}

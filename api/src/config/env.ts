@@ -187,6 +187,20 @@ export class Env {
   @Min(100)
   @Max(3_600_000)
   OUTBOX_INTERVAL_MS = 5000;
+
+  // ---------------------------------------------------------------- guest data
+
+  /** Whether the guest-data retention purge runs on a timer (at start, then every interval). */
+  @Transform(toBool)
+  @IsBoolean()
+  GUEST_DATA_PURGE_ENABLED = true;
+
+  /** How often the retention purge looks for past events to clear, in ms (default: hourly). */
+  @Transform(toInt)
+  @IsInt()
+  @Min(1000)
+  @Max(86_400_000)
+  GUEST_DATA_PURGE_INTERVAL_MS = 3_600_000;
 }
 
 export class EnvError extends Error {
@@ -202,6 +216,10 @@ export function validateEnv(raw: Record<string, unknown>): Env {
   // Tests drive the outbox by hand (`drainOutbox()`) unless they ask for the worker.
   if (env.NODE_ENV === 'test' && raw.OUTBOX_WORKER_ENABLED === undefined) {
     env.OUTBOX_WORKER_ENABLED = false;
+  }
+  // Likewise the retention purge: tests call `purgeExpired()` with a controlled clock.
+  if (env.NODE_ENV === 'test' && raw.GUEST_DATA_PURGE_ENABLED === undefined) {
+    env.GUEST_DATA_PURGE_ENABLED = false;
   }
   const problems = validateSync(env, { skipMissingProperties: false }).flatMap((error) =>
     Object.values(error.constraints ?? {}).map((m) => `${error.property}: ${m}`),

@@ -1,6 +1,9 @@
 import { GuestDataAccessEntity } from '../allergy-notes/entities/guest-data-access.entity.js';
 import { OrderSubstitutionEntity } from '../allergy-notes/entities/order-substitution.entity.js';
 import { PrepTaskTickEntity } from '../prep/entities/prep-task-tick.entity.js';
+import { ConsentRecordEntity } from '../privacy/entities/consent-record.entity.js';
+import { OrderGuestSummaryEntity } from '../privacy/entities/order-guest-summary.entity.js';
+import { PrivacyAuditEntity } from '../privacy/entities/privacy-audit.entity.js';
 import { AuthSession } from '../auth/entities/auth-session.entity.js';
 import { kitchenEntities } from '../kitchen/entities/kitchen-entities.js';
 import { OutboxMessageEntity } from '../mail/entities/outbox-message.entity.js';
@@ -35,4 +38,7 @@ export const entities = [
   OrderSubstitutionEntity,
   GuestDataAccessEntity,
   PrepTaskTickEntity,
+  OrderGuestSummaryEntity,
+  ConsentRecordEntity,
+  PrivacyAuditEntity,
 ];

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { In, type EntityManager } from 'typeorm';
 import { PaymentEntity } from '../payments/entities/payment.entity.js';
+import { guestDetailsState } from '../privacy/guest-retention.js';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { BookingContext } from './booking-context.js';
@@ -39,9 +40,26 @@ export class OrderViews {
     };
   }
 
+  /**
+   * The order's detail. Once its guest details are removed (the retention date has passed, or
+   * the client deleted their account) the guest list is empty for everyone and the detail carries
+   * `guestDetailsRemoved` saying why and since when.
+   */
   async detail(manager: EntityManager, order: OrderEntity): Promise<OrderDetail> {
     const studio = await manager.findOneByOrFail(StudioSettings, { id: 1 });
-    return toOrderDetail(await this.view(manager, order), this.context.today(studio.timeZone));
+    const today = this.context.today(studio.timeZone);
+    const removed = await guestDetailsState(
+      manager,
+      order,
+      studio.guestDataRetentionDays,
+      today,
+      studio.timeZone,
+    );
+    const view = await this.view(manager, order);
+    if (!removed) return toOrderDetail(view, today);
+    return Object.assign(toOrderDetail({ ...view, guests: [] }, today), {
+      guestDetailsRemoved: removed,
+    });
   }
 
   async detailById(manager: EntityManager, id: string): Promise<OrderDetail> {

@@ -48,6 +48,7 @@ export function toOrderSummary(
     eventDate: order.eventDate,
     serviceTime: order.serviceTime,
     guestCount: order.guestCount,
+    plates: order.plates,
     currency: order.currency,
     totalMinor: order.totalMinor,
     paidMinor: paidMinorOf(ledger),

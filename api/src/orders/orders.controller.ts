@@ -37,9 +37,11 @@ import type { Page } from '../common/page.js';
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { CheckoutService } from '../payments/checkout.service.js';
 import {
+  cancelOrderBody,
   checkoutBody,
   checkoutReturnBody,
   idempotencyKeySchema,
+  type CancelOrderBody,
   type CheckoutBody,
   type CheckoutReturnBody,
 } from './dto/order-bodies.js';
@@ -128,9 +130,9 @@ export class OrdersController {
   cancel(
     @CurrentUser() user: Principal,
     @Param('id') id: string,
-    @Body(new ZodValidationPipe(orderReasonSchema)) body: OrderReasonRequest,
+    @Body(new ZodValidationPipe(cancelOrderBody)) body: CancelOrderBody,
   ): Promise<OrderDetail> {
-    return this.orders.cancel(user, id, body.reason);
+    return this.orders.cancel(user, id, body.reason, body.refund);
   }
 
   @Roles(Role.Client, Role.Chef)

@@ -2,6 +2,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import {
   BadRequestException,
   ConflictException,
+  ForbiddenException,
   HttpException,
   HttpStatus,
   Injectable,
@@ -61,6 +62,7 @@ import { isBooked, orderMoneyOf, summarizeLedger } from './order-money.js';
 import { OrderNotifications } from './order-notifications.js';
 import { actorOf, orderFor, recordEvent, transitionOrder, type Actor } from './order-records.js';
 import { OrderViews } from './order-views.js';
+import { recordConsents } from '../privacy/consents.js';
 
 /** Sorted-key JSON, so the same booking sent with its fields in another order hashes the same. */
 function canonicalJson(value: unknown): string {
@@ -304,6 +306,11 @@ export class OrdersService {
     if (body.guestRequirements.length > 0) {
       await m.insert(OrderGuestEntity, guestRows(id, body.guestRequirements));
     }
+    // The schema refuses a booking without the terms, and guests without their agreement.
+    await recordConsents(m, now, principal.id, id, [
+      'booking_terms',
+      ...(body.guestRequirements.length > 0 ? (['guest_data'] as const) : []),
+    ]);
     await recordEvent(m, now, id, actorOf(principal), {
       from: null,
       to: OrderStatus.PendingPayment,
@@ -407,9 +414,20 @@ export class OrdersService {
     });
   }
 
-  /** The client (or the chef) cancels; what was paid is refunded by the policy tier of today. */
-  cancel(principal: Principal, id: string, reason: string | undefined): Promise<OrderDetail> {
-    return this.closeWithRefund(principal, id, OrderStatus.Cancelled, reason);
+  /**
+   * The client (or the chef) cancels; what was paid is refunded by the policy tier of today —
+   * or, when the chef chooses it, in full.
+   */
+  cancel(
+    principal: Principal,
+    id: string,
+    reason: string | undefined,
+    refund: 'policy' | 'full' = 'policy',
+  ): Promise<OrderDetail> {
+    if (refund === 'full' && principal.role !== Role.Chef) {
+      throw new ForbiddenException('Only the studio can refund a cancellation in full.');
+    }
+    return this.closeWithRefund(principal, id, OrderStatus.Cancelled, reason, refund);
   }
 
   /** The chef cannot take a requested booking: everything paid is refunded. */
@@ -428,6 +446,7 @@ export class OrdersService {
     id: string,
     to: OrderStatus.Cancelled | OrderStatus.Declined,
     reason: string | undefined,
+    refundChoice: 'policy' | 'full' = 'policy',
   ): Promise<OrderDetail> {
     const actor = actorOf(principal);
     const operation = to === OrderStatus.Declined ? 'decline' : 'cancel';
@@ -475,9 +494,19 @@ export class OrdersService {
       if (reserved.length > 0) {
         // A retry after the payment service did not answer: the same refund, again.
         const others = payments.filter((p) => !reserved.includes(p));
-        refund = this.refundPolicy(to, orderMoneyOf(order, summarizeLedger(others)), today);
+        refund = this.refundPolicy(
+          to,
+          orderMoneyOf(order, summarizeLedger(others)),
+          today,
+          refundChoice,
+        );
       } else {
-        refund = this.refundPolicy(to, orderMoneyOf(order, summarizeLedger(payments)), today);
+        refund = this.refundPolicy(
+          to,
+          orderMoneyOf(order, summarizeLedger(payments)),
+          today,
+          refundChoice,
+        );
         reserved =
           refund.refundMinor > 0
             ? await this.refunds.reserve(m, order, payments, refund.refundMinor, operation)
@@ -503,7 +532,9 @@ export class OrdersService {
         summary:
           to === OrderStatus.Declined
             ? `Declined by the studio; ${money} refunded`
-            : `Cancelled by the ${actor.role === 'chef' ? 'studio' : 'client'}; ${money} refunded (${plan.refund.refundPercent} % under the policy)`,
+            : refundChoice === 'full'
+              ? `Cancelled by the studio; ${money} refunded in full (the studio’s choice)`
+              : `Cancelled by the ${actor.role === 'chef' ? 'studio' : 'client'}; ${money} refunded (${plan.refund.refundPercent} % under the policy)`,
         reason,
       });
       if (to === OrderStatus.Declined) await this.notifications.declined(m, order, refundedMinor);
@@ -523,8 +554,19 @@ export class OrdersService {
     to: OrderStatus.Cancelled | OrderStatus.Declined,
     money: ReturnType<typeof orderMoneyOf>,
     today: string,
+    choice: 'policy' | 'full' = 'policy',
   ): RefundResult {
-    return to === OrderStatus.Declined ? declineRefund(money) : refundFor(money, today);
+    if (to === OrderStatus.Declined) return declineRefund(money);
+    if (choice === 'policy') return refundFor(money, today);
+    // The chef waives the policy: everything paid comes back, as when declining.
+    const full = declineRefund(money);
+    return {
+      ...full,
+      message:
+        full.paidMinor === 0
+          ? 'The studio cancelled this booking. Nothing was paid, so there is nothing to refund.'
+          : `The studio cancelled this booking: everything you paid (${formatMoney(full.paidMinor, full.currency)}) is refunded.`,
+    };
   }
 
   /** Closes the open checkouts of a cancelled booking (best effort: they also expire on their own). */
@@ -794,8 +836,10 @@ export class OrdersService {
     }
     if (requirementsSent && requirements) {
       await m.delete(OrderGuestEntity, { orderId: order.id });
-      if (requirements.length > 0)
+      if (requirements.length > 0) {
         await m.insert(OrderGuestEntity, guestRows(order.id, requirements));
+        await recordConsents(m, now, actor.userId, order.id, ['guest_data']);
+      }
     }
     if (change.change === 'none' && !requirementsSent) return;
     const money = (minor: number) => formatMoney(minor, order.currency);

@@ -128,8 +128,10 @@ export class CheckoutService {
         );
       }
     }
+    // The payment service wants at least 30 minutes between its own receipt of the request and
+    // expires_at: a minute of margin covers the trip and any clock skew between the two.
     const expiresAt = new Date(
-      Math.floor(now.getTime() / 1000) * 1000 + CHECKOUT_HOLD_MINUTES * 60_000,
+      Math.ceil(now.getTime() / 1000) * 1000 + CHECKOUT_HOLD_MINUTES * 60_000 + 60_000,
     );
     const row = m.create(PaymentEntity, {
       id: randomUUID(),

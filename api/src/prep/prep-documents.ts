@@ -91,8 +91,18 @@ export function planCsv(plan: PrepPlan, withCosts: boolean): string {
   return `${lines.join('\r\n')}\r\n`;
 }
 
-function winAnsi(text: string): string {
-  return text.replace(/[“”]/g, '"').replace(/[^\t\n\u0020-\u00ff€’–—]/g, '?');
+/**
+ * Text the PDF's standard fonts can draw (WinAnsi). Signs a label must not lose are spelled out
+ * first: "−18 °C" (U+2212, from `formatCelsius`) must not print as "?18 °C" on a frozen label.
+ */
+export function winAnsi(text: string): string {
+  return text
+    .replace(/[“”]/g, '"')
+    .replace(/\u2212/g, '-')
+    .replace(/≤/g, '<=')
+    .replace(/≥/g, '>=')
+    .replace(/…/g, '...')
+    .replace(/[^\t\n\u0020-\u00ff€’–—]/g, '?');
 }
 
 function pdf(title: string, draw: (doc: PDFKit.PDFDocument) => void): Promise<Buffer> {

@@ -21,6 +21,8 @@ import {
 } from '../kitchen/catalogue/kitchen-catalogue.service.js';
 import { OrderGuestEntity } from '../orders/entities/order-guest.entity.js';
 import { OrderEntity } from '../orders/entities/order.entity.js';
+import { OrderGuestSummaryEntity } from '../privacy/entities/order-guest-summary.entity.js';
+import { keptPlateChanges } from '../privacy/guest-retention.js';
 import { loadStudio } from '../studio/booking-settings.js';
 import { PrepTaskTickEntity } from './entities/prep-task-tick.entity.js';
 import { dateOfTaskKey, prepTaskKey } from './prep-task-key.js';
@@ -74,14 +76,22 @@ export class PrepService {
     const subs = ids.length
       ? await m.find(OrderSubstitutionEntity, { where: { orderId: In(ids) } })
       : [];
-    const inputs = orders.map((o) =>
-      prepOrderOf(
+    // Past events whose guest details were removed still count their changed plates.
+    const kept = ids.length
+      ? await m.find(OrderGuestSummaryEntity, { where: { orderId: In(ids) } })
+      : [];
+    const inputs = orders.map((o) => {
+      const input = prepOrderOf(
         o,
         studio.settings.timeZone,
         guests.filter((g) => g.orderId === o.id),
         subs.filter((s) => s.orderId === o.id),
-      ),
-    );
+      );
+      const keptChanges = keptPlateChanges(kept.find((k) => k.orderId === o.id));
+      return keptChanges.length === 0
+        ? input
+        : { ...input, guestChanges: [...(input.guestChanges ?? []), ...keptChanges] };
+    });
     return computeView(() =>
       planPrep(index, inputs, {
         from,

@@ -84,8 +84,8 @@ export class TeamMembersController {
   @Roles(Role.Chef)
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@Param('id', uuid) id: string): Promise<void> {
-    return this.team.remove(id);
+  remove(@CurrentUser() user: Principal, @Param('id', uuid) id: string): Promise<void> {
+    return this.team.remove(id, user.id);
   }
 }
 

@@ -202,9 +202,15 @@ export class TeamService {
     });
   }
 
-  async remove(id: string): Promise<void> {
+  /** `actorId`: the chef asking. Nobody removes their own account here (another chef can). */
+  async remove(id: string, actorId: string): Promise<void> {
     await this.dataSource.transaction(async (m) => {
       const user = await this.member(m, id);
+      if (user.id === actorId) {
+        throw new ConflictException(
+          'You cannot remove your own account. Another chef can remove it, if that is what you want.',
+        );
+      }
       if (user.role === Role.Chef) await this.keepOneChef(m, 'remove this chef');
       const now = this.clock.now();
       await m.update(User, { id }, { removedAt: now });

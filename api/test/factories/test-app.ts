@@ -27,6 +27,8 @@ export interface TestApp {
 export interface TestAppOptions {
   /** Replace providers before the module compiles (a clock, a mail transport). */
   configure?: (builder: TestingModuleBuilder) => TestingModuleBuilder;
+  /** Where the request log (pino-http) writes; by default standard output, silenced by LOG_LEVEL. */
+  logStream?: { write(line: string): void };
 }
 
 /** Boots the real AppModule on a fresh temporary SQLite file with the same middleware as main.ts. */
@@ -50,7 +52,7 @@ export async function createTestApp(
     bodyParser: false,
     logger: false,
   });
-  configureApp(app, env);
+  configureApp(app, env, { logStream: options.logStream });
   await app.init();
   const dataSource = app.get(DataSource);
   return {

@@ -18,7 +18,7 @@ import type { OrderStatus } from './order-status.js';
  *   POST /orders/:id/checkout                      owner    → CheckoutResponse      ({ plan: 'deposit' | 'full' | 'balance' | 'top_up' })
  *   POST /orders/:id/checkout/return               owner    → OrderDetail           ({ sessionId }) — the return from the payment page
  *   POST /orders/:id/cancellation-preview          owner, chef → CancellationPreview
- *   POST /orders/:id/cancel                        owner, chef → OrderDetail        (orderReasonSchema)
+ *   POST /orders/:id/cancel                        owner, chef → OrderDetail        (orderReasonSchema + refund: 'policy' | 'full'; 'full' is the chef's only)
  *   POST /orders/:id/guest-change-preview          owner, chef → GuestChangePreview (changeGuestCountSchema)
  *   PUT  /orders/:id/guests                        owner, chef → GuestChangeResult  (changeGuestCountSchema; the chef also after the deadline)
  *   POST /orders/:id/confirm                       chef     → OrderDetail           (orderReasonSchema) requested → confirmed
@@ -118,6 +118,11 @@ export interface OrderSummary {
   eventDate: IsoDate;
   serviceTime: string;
   guestCount: number;
+  /**
+   * Plates it takes from the day's capacity (guests × the menu's desserts). Sent by the API;
+   * optional only so that fixtures written before it was added still type-check.
+   */
+  plates?: number;
   currency: string;
   totalMinor: number;
   paidMinor: number;

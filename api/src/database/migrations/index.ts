@@ -4,6 +4,7 @@ import { BookingSettings1764806400000 } from './1764806400000-booking-settings.j
 import { OrdersAndPayments1764892800000 } from './1764892800000-orders-and-payments.js';
 import { AllergyNotesAndPrep1765200000000 } from './1765200000000-allergy-notes-and-prep.js';
 import { SettingsAndTeam1765100000000 } from './1765100000000-settings-and-team.js';
+import { GuestDataPrivacy1765460000000 } from './1765460000000-guest-data-privacy.js';
 
 /** Every migration, in order. Listed as classes (a glob does not work with ESM builds). */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   OrdersAndPayments1764892800000,
   SettingsAndTeam1765100000000,
   AllergyNotesAndPrep1765200000000,
+  GuestDataPrivacy1765460000000,
 ];

@@ -1,3 +1,4 @@
+import { orderReasonSchema } from '@nappe/shared';
 import { z } from 'zod';
 
 /** `POST /api/orders/:id/checkout`. */
@@ -32,3 +33,14 @@ export const idempotencyKeySchema = z
   .min(1, { error: 'Send an Idempotency-Key header (a random id per booking attempt).' })
   .max(64, { error: 'The Idempotency-Key header must be at most 64 characters.' })
   .regex(/^[\x21-\x7e]+$/, { error: 'The Idempotency-Key header must be printable ASCII.' });
+
+/**
+ * `POST /api/orders/:id/cancel`: the reason, and — for the chef only — whether the refund follows
+ * the cancellation policy (the default) or returns everything paid.
+ */
+export const cancelOrderBody = orderReasonSchema.extend({
+  refund: z
+    .enum(['policy', 'full'], { error: 'Choose the refund: policy or full.' })
+    .default('policy'),
+});
+export type CancelOrderBody = z.output<typeof cancelOrderBody>;

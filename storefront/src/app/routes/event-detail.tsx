@@ -315,12 +315,18 @@ function EventDetail({ order }: { order: OrderDetail }) {
           </Tabs.Content>
           <Tabs.Content value="guests" pt="6">
             <Stack gap="6">
-              <Text>
-                {plural(order.guestCount, 'guest')} in all;{' '}
-                {order.guests.length === 0
-                  ? 'no allergies or diets listed.'
-                  : `${plural(order.guests.length, 'guest')} with an allergy or a diet.`}
-              </Text>
+              {guestDetailsRemoved(order) ? (
+                <Text>
+                  {plural(order.guestCount, 'guest')} in all. {guestDetailsRemoved(order)}
+                </Text>
+              ) : (
+                <Text>
+                  {plural(order.guestCount, 'guest')} in all;{' '}
+                  {order.guests.length === 0
+                    ? 'no allergies or diets listed.'
+                    : `${plural(order.guests.length, 'guest')} with an allergy or a diet.`}
+                </Text>
+              )}
               {order.guests.length > 0 && (
                 <>
                   <AllergenSummary guests={order.guests} guestCount={order.guestCount} />
@@ -444,6 +450,16 @@ function DocumentRow({
       </Button>
     </Flex>
   );
+}
+
+/**
+ * Why the guests' allergies and diets are no longer shown, when they have been erased (a set
+ * number of days after the event, or with the account); the API adds it to the order.
+ */
+function guestDetailsRemoved(order: OrderDetail): string | null {
+  const removed = (order as OrderDetail & { guestDetailsRemoved?: { message?: unknown } })
+    .guestDetailsRemoved;
+  return typeof removed?.message === 'string' ? removed.message : null;
 }
 
 export function EventDetailRoute() {

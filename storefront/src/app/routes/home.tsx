@@ -1,4 +1,5 @@
 import {
+  Alert,
   Box,
   Button,
   Card,
@@ -11,7 +12,7 @@ import {
   Text,
 } from '@chakra-ui/react';
 import type { ReactNode } from 'react';
-import { Link as RouterLink } from 'react-router';
+import { Link as RouterLink, useLocation } from 'react-router';
 import {
   ArrowRightIcon,
   CalendarIcon,
@@ -28,6 +29,7 @@ import { useMenus } from '../../features/menus/api/get-menus';
 import { MenuCard } from '../../features/menus/components/menu-card';
 import { MenuGridSkeleton } from '../../features/menus/components/menu-skeletons';
 import { useStudio } from '../../features/studio/api/get-studio';
+import type { AccountDeletedState } from './my-events';
 
 const OCCASIONS = [
   {
@@ -71,9 +73,27 @@ export function HomeRoute() {
   const me = useMe();
   const signedIn = Boolean(me.data);
 
+  const accountDeleted =
+    (useLocation().state as Partial<AccountDeletedState> | null)?.accountDeleted === true;
+
   return (
     <>
       <PageTitle>Plated desserts for private events</PageTitle>
+      {accountDeleted && (
+        <Container maxW="6xl" pt="6">
+          <Alert.Root status="success" role="status" borderRadius="l2">
+            <Alert.Indicator />
+            <Alert.Content>
+              <Alert.Title>Your account is deleted</Alert.Title>
+              <Alert.Description>
+                Your name, e-mail, password and your guests’ details are erased, and you are signed
+                out. The studio keeps your payment records without your name, as bookkeeping law
+                requires.
+              </Alert.Description>
+            </Alert.Content>
+          </Alert.Root>
+        </Container>
+      )}
       <Box
         as="section"
         aria-labelledby="hero-heading"

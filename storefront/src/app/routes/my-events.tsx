@@ -8,16 +8,27 @@ import {
   Text,
   VStack,
 } from '@chakra-ui/react';
-import type { QueryClient } from '@tanstack/react-query';
-import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { flushSync } from 'react-dom';
+import {
+  Link as RouterLink,
+  useNavigate,
+  useSearchParams,
+  type LoaderFunctionArgs,
+} from 'react-router';
 import { CalendarIcon } from '../../components/ui/icons';
 import { PageTitle } from '../../components/ui/page-title';
+import { PageLoader } from '../../components/ui/page-loader';
 import { LoadError } from '../../components/ui/query-state';
 import { Skeleton } from '../../components/ui/skeleton';
 import { paths } from '../../config/paths';
+import { YourDataSection } from '../../features/account/components/your-data-section';
+import { authKeys } from '../../features/auth/api/auth-keys';
 import { RequireUser } from '../../features/auth/components/require-user';
 import { ordersQueryOptions, useOrders } from '../../features/orders/api/get-orders';
 import { OrderCard } from '../../features/orders/components/order-card';
+import { api } from '../../lib/api-client';
 import { pageCount, pageFromSearch } from '../../lib/page';
 import { requireUserLoader } from '../guards';
 import { warm } from '../loaders';
@@ -125,7 +136,38 @@ function EventList() {
   );
 }
 
+/** Where a deleted account lands: the home page, told to say so. */
+export interface AccountDeletedState {
+  accountDeleted: true;
+}
+
 export function MyEventsRoute() {
+  const navigate = useNavigate();
+  const queryClient = useQueryClient();
+
+  const [deleted, setDeleted] = useState(false);
+
+  // The server has ended every session: forget the person here — the token, everything cached
+  // for them, a booking in progress in this tab — and leave for the home page. This page stops
+  // asking for a signed-in person first, so it cannot send them to Sign in meanwhile.
+  const signOutDeleted = async () => {
+    flushSync(() => setDeleted(true));
+    try {
+      window.sessionStorage.clear();
+    } catch {
+      // Storage switched off: there is nothing kept to forget.
+    }
+    api.clearSession();
+    queryClient.setQueryData(authKeys.me(), null);
+    queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.all[0] });
+    await navigate(paths.home.getHref(), {
+      replace: true,
+      state: { accountDeleted: true } satisfies AccountDeletedState,
+    });
+  };
+
+  if (deleted) return <PageLoader />;
+
   return (
     <RequireUser>
       {(user) => (
@@ -146,6 +188,7 @@ export function MyEventsRoute() {
               </Button>
             </HStack>
             <EventList />
+            <YourDataSection onDeleted={() => void signOutDeleted()} />
           </Container>
         </>
       )}
