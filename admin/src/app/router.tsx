@@ -21,6 +21,14 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }),
     },
     {
+      path: paths.acceptInvitation.path,
+      errorElement: <ErrorPage />,
+      hydrateFallbackElement: <PageLoader />,
+      lazy: async () => ({
+        Component: (await import('./routes/accept-invitation')).AcceptInvitationRoute,
+      }),
+    },
+    {
       path: paths.today.path,
       element: <Layout />,
       loader: requireTeamMemberLoader(queryClient),
@@ -42,6 +50,10 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               },
             },
             ...kitchenRoutes(queryClient),
+            ...prepRoutes(queryClient),
+            ...allergyNotesRoutes(queryClient),
+            ...ordersRoutes(queryClient),
+            ...studioRoutes(queryClient),
             {
               path: '*',
               lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
@@ -146,6 +158,111 @@ function kitchenRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: async () => {
         const m = await import('./routes/kitchen/menu');
         return { Component: m.MenuRoute, loader: m.menuLoader(queryClient) };
+      },
+    },
+  ];
+}
+
+/** Prep: Plan, Schedule, Labels — each screen its own chunk. */
+function prepRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    { path: 'prep', loader: () => redirect(paths.prepPlan.getHref()) },
+    {
+      path: paths.prepPlan.path,
+      lazy: async () => {
+        const m = await import('./routes/prep/plan');
+        return { Component: m.PrepPlanRoute, loader: m.prepPlanLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.prepSchedule.path,
+      lazy: async () => {
+        const m = await import('./routes/prep/schedule');
+        return { Component: m.PrepScheduleRoute, loader: m.prepScheduleLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.prepLabels.path,
+      lazy: async () => {
+        const m = await import('./routes/prep/labels');
+        return { Component: m.PrepLabelsRoute, loader: m.prepLabelsLoader(queryClient) };
+      },
+    },
+  ];
+}
+
+/** Allergy notes: the list of events, one event's notes, its staff briefing — each its own chunk. */
+function allergyNotesRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.allergyNotes.path,
+      lazy: async () => {
+        const m = await import('./routes/allergy-notes/allergy-notes');
+        return { Component: m.AllergyNotesRoute, loader: m.allergyNotesLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.orderAllergyNotes.path,
+      lazy: async () => {
+        const m = await import('./routes/allergy-notes/order-allergy-notes');
+        return {
+          Component: m.OrderAllergyNotesRoute,
+          loader: m.orderAllergyNotesLoader(queryClient),
+        };
+      },
+    },
+    {
+      path: paths.briefing.path,
+      lazy: async () => {
+        const m = await import('./routes/allergy-notes/briefing');
+        return { Component: m.BriefingRoute, loader: m.briefingLoader(queryClient) };
+      },
+    },
+  ];
+}
+
+/** Orders (the inbox and one order) and the Calendar — each screen its own chunk. */
+function ordersRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.orders.path,
+      lazy: async () => {
+        const m = await import('./routes/orders/orders');
+        return { Component: m.OrdersRoute, loader: m.ordersLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.order.path,
+      lazy: async () => {
+        const m = await import('./routes/orders/order');
+        return { Component: m.OrderRoute, loader: m.orderLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.calendar.path,
+      lazy: async () => {
+        const m = await import('./routes/calendar');
+        return { Component: m.CalendarRoute, loader: m.calendarLoader(queryClient) };
+      },
+    },
+  ];
+}
+
+/** Insights and Studio → Settings (chef): each screen its own chunk; recharts only in Insights'. */
+function studioRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      path: paths.insights.path,
+      lazy: async () => {
+        const m = await import('./routes/insights');
+        return { Component: m.InsightsRoute, loader: m.insightsLoader(queryClient) };
+      },
+    },
+    {
+      path: paths.settings.path,
+      lazy: async () => {
+        const m = await import('./routes/studio/settings');
+        return { Component: m.SettingsRoute, loader: m.settingsLoader(queryClient) };
       },
     },
   ];

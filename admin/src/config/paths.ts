@@ -62,9 +62,21 @@ export const paths = {
     path: '/allergy-notes/:orderId/briefing',
     getHref: (orderId: string) => `/allergy-notes/${encodeURIComponent(orderId)}/briefing`,
   },
-  prepPlan: { path: '/prep/plan', getHref: () => '/prep/plan' },
-  prepSchedule: { path: '/prep/schedule', getHref: () => '/prep/schedule' },
-  prepLabels: { path: '/prep/labels', getHref: () => '/prep/labels' },
+  prepPlan: {
+    path: '/prep/plan',
+    getHref: (range?: { from: string; to: string }) =>
+      range ? `/prep/plan?${new URLSearchParams(range)}` : '/prep/plan',
+  },
+  prepSchedule: {
+    path: '/prep/schedule',
+    getHref: (date?: string) =>
+      date ? `/prep/schedule?${new URLSearchParams({ date })}` : '/prep/schedule',
+  },
+  prepLabels: {
+    path: '/prep/labels',
+    getHref: (date?: string) =>
+      date ? `/prep/labels?${new URLSearchParams({ date })}` : '/prep/labels',
+  },
   insights: { path: '/insights', getHref: () => '/insights' },
   settings: { path: '/studio/settings', getHref: () => '/studio/settings' },
   acceptInvitation: { path: '/accept-invitation', getHref: () => '/accept-invitation' },

@@ -2,6 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
 import { chefUser, clientUser, sessionFor, staffUser } from '../../testing/fixtures';
+import { createPrepApi } from '../../testing/prep-api';
 import { renderApp } from '../../testing/render-app';
 import { server } from '../../testing/server';
 
@@ -30,26 +31,32 @@ describe('Sign in (kitchen)', () => {
   });
 
   it('the chef lands on Today, greeted by name with the role', async () => {
-    server.use(http.post('/api/auth/login', () => HttpResponse.json(sessionFor(chefUser))));
+    server.use(
+      http.post('/api/auth/login', () => HttpResponse.json(sessionFor(chefUser))),
+      ...createPrepApi({ user: chefUser, events: [], waitingRequests: 1 }).handlers,
+    );
     const { user, router } = renderApp('/sign-in');
     await signIn(user, chefUser.email);
 
     expect(await screen.findByRole('heading', { level: 1, name: /, Inès$/ })).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/');
-    expect(screen.getByRole('heading', { name: 'Requests awaiting you' })).toBeInTheDocument();
+    expect(await screen.findByRole('complementary', { name: 'Requests' })).toHaveTextContent(
+      '1 request waiting for your decision',
+    );
     expect(document.title).toBe('Today · Nappe kitchen');
   });
 
   it('staff land on Today too, without the chef’s requests panel', async () => {
-    server.use(http.post('/api/auth/login', () => HttpResponse.json(sessionFor(staffUser))));
+    server.use(
+      http.post('/api/auth/login', () => HttpResponse.json(sessionFor(staffUser))),
+      ...createPrepApi({ user: staffUser, events: [] }).handlers,
+    );
     const { user } = renderApp('/sign-in');
     await signIn(user, staffUser.email);
 
     expect(await screen.findByRole('heading', { level: 1, name: /, Tomás$/ })).toBeInTheDocument();
-    expect(screen.getByRole('heading', { name: 'Allergy notes' })).toBeInTheDocument();
-    expect(
-      screen.queryByRole('heading', { name: 'Requests awaiting you' }),
-    ).not.toBeInTheDocument();
+    expect(await screen.findByText('Nothing to prep today.')).toBeInTheDocument();
+    expect(screen.queryByRole('complementary', { name: 'Requests' })).not.toBeInTheDocument();
   });
 
   it('turns a client away with a clear message, a link to the storefront, and signs them out', async () => {

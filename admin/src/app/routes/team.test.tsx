@@ -1,6 +1,6 @@
-import { screen, waitFor, within } from '@testing-library/react';
+import { configure, screen, waitFor, within } from '@testing-library/react';
 import { http, HttpResponse } from 'msw';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { chefUser, makeAccounts, pageOf, sessionFor, staffUser } from '../../testing/fixtures';
 import { renderApp } from '../../testing/render-app';
 import { server } from '../../testing/server';
@@ -13,8 +13,15 @@ async function openMenu(user: ReturnType<typeof renderApp>['user']) {
 }
 
 function signedInAs(user: typeof chefUser) {
-  server.use(http.post('/api/auth/refresh', () => HttpResponse.json(sessionFor(user))));
+  server.use(
+    http.post('/api/auth/refresh', () => HttpResponse.json(sessionFor(user))),
+    // The Team screen also lists pending invitations (team-invitations.test.tsx tests them).
+    http.get('/api/studio/invitations', () => HttpResponse.json([])),
+  );
 }
+
+// Whole-route tests on a busy 2-core machine: screens can take longer than the default wait.
+beforeAll(() => configure({ asyncUtilTimeout: 15_000 }));
 
 describe('Studio → Team', () => {
   it('lists accounts in a table and pages through them', async () => {
@@ -46,7 +53,7 @@ describe('Studio → Team', () => {
     expect(screen.getByText('Account 21')).toBeInTheDocument();
     expect(router.state.location.search).toBe('?page=2');
     expect(requested).toEqual(['?page=1&pageSize=20', '?page=2&pageSize=20']);
-  });
+  }, 60_000);
 
   it('shows a loading skeleton, then an error with a retry that works', async () => {
     signedInAs(chefUser);
@@ -99,37 +106,62 @@ describe('Studio → Team', () => {
     expect(nav.queryByText('Studio')).not.toBeInTheDocument();
   });
 
-  it('shows the chef Today, Kitchen and Studio → Team, and nothing that is not built yet', async () => {
+  it('shows the chef every section, Studio → Settings and Team and Insights included', async () => {
     signedInAs(chefUser);
-    const { user } = renderApp('/');
+    server.use(
+      http.get('/api/users', () =>
+        HttpResponse.json({ items: [], total: 0, page: 1, pageSize: 20 }),
+      ),
+    );
+    // Opened on Team rather than Today, whose panels fetch data this test is not about.
+    const { user } = renderApp('/studio/team');
     const nav = await openMenu(user);
-    expect(nav.getByRole('link', { name: 'Today' })).toHaveAttribute('aria-current', 'page');
+    expect(nav.getByRole('link', { name: 'Team' })).toHaveAttribute('aria-current', 'page');
     expect(nav.getByText('Studio')).toBeInTheDocument();
     expect(nav.getByRole('link', { name: 'Team' })).toHaveAttribute('href', '/studio/team');
     expect(nav.getByText('Kitchen')).toBeInTheDocument();
+    expect(nav.getAllByRole('link').map((a) => a.getAttribute('href'))).toEqual([
+      '/',
+      '/orders',
+      '/calendar',
+      '/kitchen/ingredients',
+      '/kitchen/recipes',
+      '/kitchen/desserts',
+      '/kitchen/menus',
+      '/prep/plan',
+      '/prep/schedule',
+      '/prep/labels',
+      '/allergy-notes',
+      '/studio/settings',
+      '/studio/team',
+      '/insights',
+    ]);
+  });
+
+  it('shows staff the Kitchen section too (read-only screens)', async () => {
+    signedInAs(staffUser);
+    const { user } = renderApp('/studio/team');
+    const nav = await openMenu(user);
+    expect(nav.getByRole('link', { name: 'Recipes' })).toHaveAttribute('href', '/kitchen/recipes');
+    // Today, four Kitchen screens, three Prep screens, Allergy notes: no Orders, Studio or Insights.
     expect(nav.getAllByRole('link').map((a) => a.getAttribute('href'))).toEqual([
       '/',
       '/kitchen/ingredients',
       '/kitchen/recipes',
       '/kitchen/desserts',
       '/kitchen/menus',
-      '/studio/team',
+      '/prep/plan',
+      '/prep/schedule',
+      '/prep/labels',
+      '/allergy-notes',
     ]);
-  });
-
-  it('shows staff the Kitchen section too (read-only screens)', async () => {
-    signedInAs(staffUser);
-    const { user } = renderApp('/');
-    const nav = await openMenu(user);
-    expect(nav.getByRole('link', { name: 'Recipes' })).toHaveAttribute('href', '/kitchen/recipes');
-    expect(nav.getAllByRole('link')).toHaveLength(5);
   });
 });
 
 describe('shell', () => {
   it('an unknown address shows the 404 page inside the app', async () => {
     signedInAs(chefUser);
-    renderApp('/orders/unknown');
+    renderApp('/no-such-screen');
     expect(
       await screen.findByRole('heading', { level: 1, name: 'This page does not exist' }),
     ).toBeInTheDocument();
@@ -139,7 +171,12 @@ describe('shell', () => {
   it('signing out returns to Sign in', async () => {
     signedInAs(chefUser);
     server.use(http.post('/api/auth/logout', () => new HttpResponse(null, { status: 204 })));
-    const { user, router } = renderApp('/');
+    server.use(
+      http.get('/api/users', () =>
+        HttpResponse.json({ items: [], total: 0, page: 1, pageSize: 20 }),
+      ),
+    );
+    const { user, router } = renderApp('/studio/team');
     await openMenu(user);
     await user.click(within(screen.getByRole('dialog')).getByRole('button', { name: 'Sign out' }));
     await waitFor(() => expect(router.state.location.pathname).toBe('/sign-in'));

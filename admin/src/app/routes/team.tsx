@@ -1,18 +1,22 @@
 import {
   Alert,
+  Box,
   Button,
   ButtonGroup,
+  Card,
   Container,
   EmptyState,
   Flex,
   Heading,
   IconButton,
   Pagination,
+  Skeleton,
   Stack,
   Text,
 } from '@chakra-ui/react';
 import { Role } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
+import { useState, type ReactNode } from 'react';
 import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { ChevronLeftIcon, ChevronRightIcon, GuestsIcon } from '../../components/ui/icons';
 import { PageTitle } from '../../components/ui/page-title';
@@ -22,6 +26,10 @@ import { RequireRole } from '../../features/auth/components/require-role';
 import { useStudio } from '../../features/studio/api/get-studio';
 import { ApiError } from '../../lib/api-client';
 import { USERS_PAGE_SIZE, usersQueryOptions, useUsers } from '../../features/users/api/get-users';
+import { invitationsQueryOptions, useInvitations } from '../../features/users/api/invitations';
+import { InvitationsList } from '../../features/users/components/invitations-list';
+import { InviteForm } from '../../features/users/components/invite-form';
+import { MemberActions } from '../../features/users/components/member-actions';
 import { UsersTable, UsersTableSkeleton } from '../../features/users/components/users-table';
 
 function pageFrom(value: string | null): number {
@@ -37,6 +45,7 @@ export const teamLoader =
     if (user?.role === Role.Chef) {
       const page = pageFrom(new URL(request.url).searchParams.get('page'));
       void queryClient.prefetchQuery(usersQueryOptions({ page, pageSize: USERS_PAGE_SIZE }));
+      void queryClient.prefetchQuery(invitationsQueryOptions());
     }
     return null;
   };
@@ -46,12 +55,73 @@ export function TeamRoute() {
   if (!me.data) return null; // The layout renders only for a signed-in team member.
   return (
     <RequireRole user={me.data} roles={[Role.Chef]}>
-      <Team />
+      <Team currentUserId={me.data.id} />
     </RequireRole>
   );
 }
 
-function Team() {
+function Section({
+  id,
+  title,
+  description,
+  children,
+}: {
+  id: string;
+  title: string;
+  description?: ReactNode;
+  children: ReactNode;
+}) {
+  return (
+    <Box as="section" aria-labelledby={`${id}-title`}>
+      <Stack gap="1" mb="4">
+        <Heading as="h2" id={`${id}-title`} fontSize="2xl" fontWeight="normal">
+          {title}
+        </Heading>
+        {description && (
+          <Text color="fg.muted" maxW="2xl">
+            {description}
+          </Text>
+        )}
+      </Stack>
+      {children}
+    </Box>
+  );
+}
+
+function PendingInvitations({ timeZone }: { timeZone?: string }) {
+  const invitations = useInvitations();
+  if (invitations.isPending) {
+    return (
+      <Box role="status">
+        <Text srOnly>Loading invitations…</Text>
+        <Skeleton height="16" />
+      </Box>
+    );
+  }
+  if (invitations.isError) {
+    return (
+      <Alert.Root status="error" role="alert" borderRadius="l2">
+        <Alert.Indicator />
+        <Alert.Content gap="3">
+          <Alert.Title>The pending invitations could not be loaded</Alert.Title>
+          <Button
+            size="sm"
+            variant="outline"
+            alignSelf="start"
+            loading={invitations.isFetching}
+            onClick={() => void invitations.refetch()}
+          >
+            Try again
+          </Button>
+        </Alert.Content>
+      </Alert.Root>
+    );
+  }
+  return <InvitationsList invitations={invitations.data} timeZone={timeZone} />;
+}
+
+function Team({ currentUserId }: { currentUserId: string }) {
+  const [memberMessage, setMemberMessage] = useState<string | null>(null);
   const [searchParams, setSearchParams] = useSearchParams();
   const page = pageFrom(searchParams.get('page'));
   const users = useUsers({ page, pageSize: USERS_PAGE_SIZE });
@@ -72,109 +142,153 @@ function Team() {
             Team and client accounts
           </Heading>
           <Text color="fg.muted" maxW="2xl">
-            Everyone with an account at the studio: the team who use this kitchen app, and the
-            clients who book on the storefront.
+            Invite the people who work with you, choose what they can do, and see everyone with an
+            account: the team who use this kitchen app and the clients who book on the storefront.
           </Text>
         </Stack>
 
-        {users.isPending ? (
-          <UsersTableSkeleton />
-        ) : users.isError ? (
-          <Alert.Root status="error" role="alert" borderRadius="l2">
-            <Alert.Indicator />
-            <Alert.Content gap="3">
-              <Alert.Title>The list of accounts could not be loaded</Alert.Title>
-              <Alert.Description>
-                {users.error instanceof ApiError && users.error.status >= 500
-                  ? 'The server ran into a problem. Please try again in a moment.'
-                  : users.error.message}
-              </Alert.Description>
-              <Button
-                size="sm"
-                variant="outline"
-                alignSelf="start"
-                loading={users.isFetching}
-                onClick={() => void users.refetch()}
-              >
-                Try again
-              </Button>
-            </Alert.Content>
-          </Alert.Root>
-        ) : users.data.total === 0 ? (
-          <EmptyState.Root
-            borderWidth="1px"
-            borderStyle="dashed"
-            borderColor="border.emphasized"
-            borderRadius="l3"
-            bg="bg.panel"
+        <Stack gap={{ base: '8', md: '10' }}>
+          <Section
+            id="invite"
+            title="Invite a team member"
+            description="They get an e-mail with a link to choose their password. The link works once, for 7 days."
           >
-            <EmptyState.Content>
-              <EmptyState.Indicator color="caramel.fg">
-                <GuestsIcon />
-              </EmptyState.Indicator>
-              <EmptyState.Title fontFamily="heading" textStyle="xl">
-                No accounts yet
-              </EmptyState.Title>
-              <EmptyState.Description color="fg.muted" textAlign="center" maxW="md">
-                Team members and clients will be listed here once they have accounts.
-              </EmptyState.Description>
-            </EmptyState.Content>
-          </EmptyState.Root>
-        ) : users.data.items.length === 0 ? (
-          <Stack gap="3" align="start">
-            <Text>This page is past the end of the list.</Text>
-            <Button asChild variant="outline" size="sm">
-              <RouterLink to={paths.team.getHref()}>Back to the first page</RouterLink>
-            </Button>
-          </Stack>
-        ) : (
-          <Stack gap="4" opacity={users.isPlaceholderData ? 0.6 : 1} transition="opacity 0.2s">
-            <UsersTable users={users.data.items} timeZone={studio.data?.timeZone} />
-            <Flex
-              direction={{ base: 'column', sm: 'row' }}
-              justify="space-between"
-              align={{ base: 'start', sm: 'center' }}
-              gap="3"
-            >
-              <Text color="fg.muted" textStyle="sm" aria-live="polite">
-                {rangeText(
-                  users.data.page,
-                  users.data.pageSize,
-                  users.data.items.length,
-                  users.data.total,
-                )}
-              </Text>
-              {users.data.total > users.data.pageSize && (
-                <Pagination.Root
-                  count={users.data.total}
-                  pageSize={users.data.pageSize}
-                  page={page}
-                  onPageChange={(details) => goTo(details.page)}
-                >
-                  <ButtonGroup variant="ghost" size="sm" attached={false}>
-                    <Pagination.PrevTrigger asChild>
-                      <IconButton aria-label="Previous page">
-                        <ChevronLeftIcon />
-                      </IconButton>
-                    </Pagination.PrevTrigger>
-                    <Pagination.Items
-                      render={(item) => (
-                        <IconButton variant={{ base: 'ghost', _selected: 'outline' }}>
-                          {item.value}
-                        </IconButton>
-                      )}
-                    />
-                    <Pagination.NextTrigger asChild>
-                      <IconButton aria-label="Next page">
-                        <ChevronRightIcon />
-                      </IconButton>
-                    </Pagination.NextTrigger>
-                  </ButtonGroup>
-                </Pagination.Root>
+            <Card.Root variant="outline" bg="bg.panel" borderColor="border">
+              <Card.Body p={{ base: '4', md: '6' }}>
+                <InviteForm />
+              </Card.Body>
+            </Card.Root>
+          </Section>
+
+          <Section id="pending" title="Pending invitations">
+            <PendingInvitations timeZone={studio.data?.timeZone} />
+          </Section>
+
+          <Section
+            id="accounts"
+            title="Accounts"
+            description="A change of role or a removal applies on the member’s next request. Your own account can be changed or removed only by another chef."
+          >
+            <Box aria-live="polite" aria-atomic="true" mb={memberMessage ? '4' : '0'}>
+              {memberMessage && (
+                <Alert.Root status="success" borderRadius="l2">
+                  <Alert.Indicator />
+                  <Alert.Content>
+                    <Alert.Title>{memberMessage}</Alert.Title>
+                  </Alert.Content>
+                </Alert.Root>
               )}
-            </Flex>
-          </Stack>
-        )}
+            </Box>
+            {users.isPending ? (
+              <UsersTableSkeleton withActions />
+            ) : users.isError ? (
+              <Alert.Root status="error" role="alert" borderRadius="l2">
+                <Alert.Indicator />
+                <Alert.Content gap="3">
+                  <Alert.Title>The list of accounts could not be loaded</Alert.Title>
+                  <Alert.Description>
+                    {users.error instanceof ApiError && users.error.status >= 500
+                      ? 'The server ran into a problem. Please try again in a moment.'
+                      : users.error.message}
+                  </Alert.Description>
+                  <Button
+                    size="sm"
+                    variant="outline"
+                    alignSelf="start"
+                    loading={users.isFetching}
+                    onClick={() => void users.refetch()}
+                  >
+                    Try again
+                  </Button>
+                </Alert.Content>
+              </Alert.Root>
+            ) : users.data.total === 0 ? (
+              <EmptyState.Root
+                borderWidth="1px"
+                borderStyle="dashed"
+                borderColor="border.emphasized"
+                borderRadius="l3"
+                bg="bg.panel"
+              >
+                <EmptyState.Content>
+                  <EmptyState.Indicator color="caramel.fg">
+                    <GuestsIcon />
+                  </EmptyState.Indicator>
+                  <EmptyState.Title fontFamily="heading" textStyle="xl">
+                    No accounts yet
+                  </EmptyState.Title>
+                  <EmptyState.Description color="fg.muted" textAlign="center" maxW="md">
+                    Team members and clients will be listed here once they have accounts.
+                  </EmptyState.Description>
+                </EmptyState.Content>
+              </EmptyState.Root>
+            ) : users.data.items.length === 0 ? (
+              <Stack gap="3" align="start">
+                <Text>This page is past the end of the list.</Text>
+                <Button asChild variant="outline" size="sm">
+                  <RouterLink to={paths.team.getHref()}>Back to the first page</RouterLink>
+                </Button>
+              </Stack>
+            ) : (
+              <Stack gap="4" opacity={users.isPlaceholderData ? 0.6 : 1} transition="opacity 0.2s">
+                <UsersTable
+                  users={users.data.items}
+                  timeZone={studio.data?.timeZone}
+                  renderActions={(user) => (
+                    <MemberActions
+                      user={user}
+                      currentUserId={currentUserId}
+                      onDone={setMemberMessage}
+                    />
+                  )}
+                />
+                <Flex
+                  direction={{ base: 'column', sm: 'row' }}
+                  justify="space-between"
+                  align={{ base: 'start', sm: 'center' }}
+                  gap="3"
+                >
+                  <Text color="fg.muted" textStyle="sm" aria-live="polite">
+                    {rangeText(
+                      users.data.page,
+                      users.data.pageSize,
+                      users.data.items.length,
+                      users.data.total,
+                    )}
+                  </Text>
+                  {users.data.total > users.data.pageSize && (
+                    <Pagination.Root
+                      count={users.data.total}
+                      pageSize={users.data.pageSize}
+                      page={page}
+                      onPageChange={(details) => goTo(details.page)}
+                    >
+                      <ButtonGroup variant="ghost" size="sm" attached={false}>
+                        <Pagination.PrevTrigger asChild>
+                          <IconButton aria-label="Previous page">
+                            <ChevronLeftIcon />
+                          </IconButton>
+                        </Pagination.PrevTrigger>
+                        <Pagination.Items
+                          render={(item) => (
+                            <IconButton variant={{ base: 'ghost', _selected: 'outline' }}>
+                              {item.value}
+                            </IconButton>
+                          )}
+                        />
+                        <Pagination.NextTrigger asChild>
+                          <IconButton aria-label="Next page">
+                            <ChevronRightIcon />
+                          </IconButton>
+                        </Pagination.NextTrigger>
+                      </ButtonGroup>
+                    </Pagination.Root>
+                  )}
+                </Flex>
+              </Stack>
+            )}
+          </Section>
+        </Stack>
       </Container>
     </>
   );

@@ -13,6 +13,7 @@ export interface StudioCard {
 export const studioKeys = {
   all: ['studio'] as const,
   card: () => [...studioKeys.all, 'card'] as const,
+  settings: () => [...studioKeys.all, 'settings'] as const,
 };
 
 export const getStudio = (): Promise<StudioCard> => api.get<StudioCard>('/studio', { auth: false });

@@ -1,4 +1,5 @@
 import { Box, Skeleton, Table, Text, VisuallyHidden } from '@chakra-ui/react';
+import type { ReactNode } from 'react';
 import { RoleBadge } from '../../../components/ui/role-badge';
 import type { UserListItem } from '../api/get-users';
 
@@ -8,14 +9,22 @@ function formatJoined(iso: string, timeZone?: string): string {
   return new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeZone }).format(date);
 }
 
-const COLUMNS = ['Name', 'E-mail', 'Role', 'Joined'] as const;
+const COLUMNS = ['Name', 'E-mail', 'Role', 'Joined', 'Actions'] as const;
 /** On a phone the e-mail moves under the name and the date is left out. */
 const HIDE_BELOW: Partial<Record<(typeof COLUMNS)[number], 'md'>> = {
   'E-mail': 'md',
   Joined: 'md',
 };
 
-function Frame({ children, busy }: { children: React.ReactNode; busy?: boolean }) {
+function Frame({
+  children,
+  busy,
+  withActions,
+}: {
+  children: ReactNode;
+  busy?: boolean;
+  withActions?: boolean;
+}) {
   return (
     <Table.ScrollArea
       borderWidth="1px"
@@ -24,11 +33,11 @@ function Frame({ children, busy }: { children: React.ReactNode; busy?: boolean }
       bg="bg.panel"
       aria-busy={busy || undefined}
     >
-      <Table.Root size="md" interactive={!busy}>
+      <Table.Root size="md" interactive={!busy && !withActions}>
         <Table.Caption srOnly>Accounts at the studio</Table.Caption>
         <Table.Header>
           <Table.Row bg="bg.muted">
-            {COLUMNS.map((column) => (
+            {COLUMNS.filter((c) => withActions || c !== 'Actions').map((column) => (
               <Table.ColumnHeader
                 key={column}
                 color="fg.muted"
@@ -46,9 +55,18 @@ function Frame({ children, busy }: { children: React.ReactNode; busy?: boolean }
   );
 }
 
-export function UsersTable({ users, timeZone }: { users: UserListItem[]; timeZone?: string }) {
+export function UsersTable({
+  users,
+  timeZone,
+  renderActions,
+}: {
+  users: UserListItem[];
+  timeZone?: string;
+  /** The last column's content for each account; without it the table has no actions column. */
+  renderActions?: (user: UserListItem) => ReactNode;
+}) {
   return (
-    <Frame>
+    <Frame withActions={!!renderActions}>
       {users.map((user) => (
         <Table.Row key={user.id} bg="bg.panel">
           <Table.Cell>
@@ -68,6 +86,7 @@ export function UsersTable({ users, timeZone }: { users: UserListItem[]; timeZon
           <Table.Cell hideBelow="md" whiteSpace="nowrap">
             {formatJoined(user.createdAt, timeZone)}
           </Table.Cell>
+          {renderActions && <Table.Cell>{renderActions(user)}</Table.Cell>}
         </Table.Row>
       ))}
     </Frame>
@@ -75,14 +94,20 @@ export function UsersTable({ users, timeZone }: { users: UserListItem[]; timeZon
 }
 
 /** The table's shape while the first page loads. */
-export function UsersTableSkeleton({ rows = 6 }: { rows?: number }) {
+export function UsersTableSkeleton({
+  rows = 6,
+  withActions,
+}: {
+  rows?: number;
+  withActions?: boolean;
+}) {
   return (
     <Box role="status">
       <VisuallyHidden>Loading accounts…</VisuallyHidden>
-      <Frame busy>
+      <Frame busy withActions={withActions}>
         {Array.from({ length: rows }, (_, row) => (
           <Table.Row key={row} bg="bg.panel">
-            {COLUMNS.map((column) => (
+            {COLUMNS.filter((c) => withActions || c !== 'Actions').map((column) => (
               <Table.Cell key={column} hideBelow={HIDE_BELOW[column]}>
                 <Skeleton height="4" width={column === 'E-mail' ? '48' : '24'} />
               </Table.Cell>

@@ -1,0 +1,35 @@
+/** Response shapes the Orders screens read that are not in @nappe/shared. */
+
+/** One page of a list (api/src/common/page.ts). */
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+/** What the order's detail reads of `GET /api/orders/:id/allergy-notes` (allergy-notes.types.ts). */
+export interface AllergySummary {
+  orderId: string;
+  guests: Array<{ guestId: number; label: string }>;
+  /** Guest plates that still conflict with the guest's requirement. */
+  unresolved: Array<{ guestId: number; guest: string; dessertName: string; messages: string[] }>;
+  advisoryCount: number;
+}
+
+/** `GET /api/orders/:id/access-log`: one opening of the guests' health details by the studio. */
+export interface AccessLogEntry {
+  at: string;
+  userId: string | null;
+  name: string | null;
+  role: string;
+  /** allergy_notes, briefing, briefing_pdf or guest_list. */
+  what: string;
+}
+
+/** The parts of `GET /api/studio/settings` the Calendar shows. */
+export interface CalendarSettings {
+  dailyPlateCapacity: number;
+  blackoutDates: string[];
+  timeZone: string;
+}
