@@ -175,7 +175,8 @@ test.afterAll(async () => {
 
 /** A screenshot once dialogs and transitions have finished moving. */
 async function still(page: Page, name: string) {
-  await page.evaluate(() => Promise.all(document.getAnimations().map((a) => a.finished)));
+  // A cancelled animation rejects its `finished`: settled is enough.
+  await page.evaluate(() => Promise.allSettled(document.getAnimations().map((a) => a.finished)));
   await snap(page, name);
 }
 
@@ -210,6 +211,14 @@ test('the chef filters the inbox, opens an order, confirms a request through the
     }),
   ).toBeVisible();
   await still(page, 'admin-orders-inbox');
+
+  // Search by reference: one row; Back returns to the whole list with the box emptied.
+  await page.getByLabel('Search').fill(toConfirm.reference);
+  await expect(page).toHaveURL(new RegExp(`[?&]q=${toConfirm.reference}`));
+  await expect(inbox.locator('tbody tr')).toHaveCount(1);
+  await page.goBack();
+  await expect(page.getByLabel('Search')).toHaveValue('');
+  await expect(inbox.getByRole('link', { name: alreadyConfirmed.reference })).toBeVisible();
 
   await page.getByLabel('Status').selectOption({ label: 'Confirmed' });
   await expect(page).toHaveURL(/[?&]status=confirmed/);

@@ -176,7 +176,7 @@ describe('Calendar', () => {
     const item = within(day.closest('li')!);
     expect(item.getByRole('link', { name: /N-2026-0038/ })).toBeInTheDocument();
     expect(item.getByText('Confirmed')).toBeInTheDocument();
-    expect(item.getByText('24 of 120 plates')).toBeInTheDocument();
+    expect(item.getByText('24 of 120 plates, 96 left')).toBeInTheDocument();
     const closed = screen.getByRole('heading', { level: 3, name: /Wednesday 25 March/ });
     expect(
       within(closed.closest('li')!).getByText('The studio takes no events this day.'),

@@ -313,6 +313,27 @@ describe('Order detail', () => {
     expect(d.getByLabelText(/Reason/)).toHaveValue('Fully booked');
   }, 60_000);
 
+  it('says so when the guests’ details were removed, and does not ask for the allergy check', async () => {
+    const past = CONFIRMED_ORDER();
+    past.detail.guests = [];
+    const message =
+      'Guest details removed after 30 days: the number of guests and anonymous counts are kept for planning.';
+    Object.assign(past.detail, {
+      guestDetailsRemoved: {
+        removed: true,
+        reason: 'retention',
+        removedFrom: '2026-04-13',
+        message,
+      },
+    });
+    const { api } = renderOrders('/orders/ord-38', [past]);
+    await pageHeading('N-2026-0038');
+    const guests = await region('Guests and their requirements');
+    expect(guests.getByText(`24 guests. ${message}`)).toBeInTheDocument();
+    expect(guests.queryByText(/unresolved conflict/)).toBeNull();
+    expect(api.state.requests.some((r) => r.path.endsWith('/allergy-notes'))).toBe(false);
+  });
+
   it('says so when the order does not exist', async () => {
     renderOrders('/orders/nope', standardOrders());
     expect(await screen.findByText('There is no such order')).toBeInTheDocument();

@@ -14,6 +14,7 @@ import {
   LoadError,
 } from '../../../features/kitchen/components/load-states';
 import { orderQueryOptions, useOrder } from '../../../features/orders/api/get-order';
+import type { OrderDetailView } from '../../../features/orders/api/types';
 import { useOrderAccessLog } from '../../../features/orders/api/get-order-access-log';
 import { useOrderAllergySummary } from '../../../features/orders/api/get-order-allergy-summary';
 import { OrderActions } from '../../../features/orders/components/order-actions';
@@ -68,8 +69,9 @@ function Order({ id }: { id: string }) {
   const order = useOrder(id);
   const studio = useStudio();
   const timeZone = studio.data?.timeZone ?? deviceTimeZone();
-  const hasOrder = order.isSuccess;
-  const allergy = useOrderAllergySummary(id, hasOrder);
+  const removed = (order.data as OrderDetailView | undefined)?.guestDetailsRemoved ?? null;
+  // Once the guests' details are removed there is nothing to check (the API answers 410).
+  const allergy = useOrderAllergySummary(id, order.isSuccess && !removed);
   const accessLog = useOrderAccessLog(id);
   const [announcement, setAnnouncement] = useState('');
   const statusRef = useRef<HTMLDivElement>(null);
@@ -173,6 +175,7 @@ function Order({ id }: { id: string }) {
           <EventSection order={o} timeZone={timeZone} />
           <GuestsSection
             order={o}
+            removed={removed}
             allergy={{ data: allergy.data, isPending: allergy.isPending, error: allergy.error }}
             allergyNotesHref={allergyNotesHref}
           />

@@ -1,3 +1,5 @@
+import type { OrderDetail } from '@nappe/shared';
+
 /** Response shapes the Orders screens read that are not in @nappe/shared. */
 
 /** One page of a list (api/src/common/page.ts). */
@@ -33,3 +35,17 @@ export interface CalendarSettings {
   blackoutDates: string[];
   timeZone: string;
 }
+
+/**
+ * Present on an order whose guests' details were removed (the studio's retention period after
+ * the event, or the client deleted their account): the guest list is then empty and the allergy
+ * notes answer 410 (api/src/privacy/guest-retention.ts).
+ */
+export interface GuestDetailsRemoved {
+  removed: true;
+  reason: string;
+  removedFrom: string;
+  message: string;
+}
+
+export type OrderDetailView = OrderDetail & { guestDetailsRemoved?: GuestDetailsRemoved | null };

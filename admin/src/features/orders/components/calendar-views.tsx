@@ -28,11 +28,20 @@ export interface CalendarData {
 /** A grid cell lists this many events; the rest are a link away. */
 export const EVENTS_PER_CELL = 3;
 
-/** "40 of 240 plates", "40 plates", or nothing when the figures are not known. */
-function platesText(orders: readonly OrderSummary[], capacity: number | null): string | null {
+/**
+ * "40 of 240 plates" (", 200 left" where there is room to say it), "40 plates" without the
+ * capacity, or nothing when the figures are not known.
+ */
+function platesText(
+  orders: readonly OrderSummary[],
+  capacity: number | null,
+  withLeft = false,
+): string | null {
   const used = platesOn(orders);
   if (used === null) return null;
-  return capacity === null ? plural(used, 'plate') : `${used} of ${capacity} plates`;
+  if (capacity === null) return plural(used, 'plate');
+  const left = withLeft ? `, ${Math.max(0, capacity - used)} left` : '';
+  return `${used} of ${capacity} plates${left}`;
 }
 
 /** One event as a line: time, reference, guests and status in words. */
@@ -222,7 +231,8 @@ export function CalendarAgenda({ month, today, byDay, blackout, capacity, hrefOf
       <List.Root as="ul" listStyle="none" gap="3">
         {days.map((date) => {
           const orders = byDay.get(date) ?? [];
-          const plates = orders.length > 0 ? platesText(orders, capacity) : null;
+          const upcoming = compareIsoDates(date, today) >= 0;
+          const plates = orders.length > 0 ? platesText(orders, capacity, upcoming) : null;
           return (
             <List.Item key={date} data-date={date}>
               <Box

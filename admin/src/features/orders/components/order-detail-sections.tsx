@@ -27,7 +27,7 @@ import {
 import type { ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { AllergyIcon } from '../../../components/ui/icons';
-import type { AccessLogEntry, AllergySummary } from '../api/types';
+import type { AccessLogEntry, AllergySummary, GuestDetailsRemoved } from '../api/types';
 import {
   ACCESS_KINDS,
   describeError,
@@ -162,10 +162,12 @@ function hasRequirement(g: OrderGuest): boolean {
 /** Guests and what they cannot eat, with the allergy notes' count of plates still in conflict. */
 export function GuestsSection({
   order,
+  removed,
   allergy,
   allergyNotesHref,
 }: {
   order: OrderDetail;
+  removed: GuestDetailsRemoved | null;
   allergy: { data?: AllergySummary; isPending: boolean; error: unknown };
   allergyNotesHref: string;
 }) {
@@ -184,11 +186,17 @@ export function GuestsSection({
       }
     >
       <Stack gap="4">
-        <Text>
-          {plural(order.guestCount, 'guest')}; {listed.length === 0 ? 'none' : listed.length} with
-          allergies, diets or notes.
-        </Text>
-        {allergy.isPending ? (
+        {removed ? (
+          <Text>
+            {plural(order.guestCount, 'guest')}. {removed.message}
+          </Text>
+        ) : (
+          <Text>
+            {plural(order.guestCount, 'guest')}; {listed.length === 0 ? 'none' : listed.length} with
+            allergies, diets or notes.
+          </Text>
+        )}
+        {removed ? null : allergy.isPending ? (
           <Skeleton height="6" maxW="sm" />
         ) : allergy.error ? (
           <Text color="fg.error">
