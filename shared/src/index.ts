@@ -32,3 +32,4 @@ export * from './prep-schedule/prep-schedule.js';
 export * from './prep-plan/prep-order.js';
 export * from './prep-plan/prep-plan.js';
 export * from './orders/order-api.js';
+export * from './insights/dashboard-api.js';
