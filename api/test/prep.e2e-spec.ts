@@ -1,13 +1,16 @@
+import { randomUUID } from 'node:crypto';
 import {
   addIsoDays,
   dateInTimeZone,
   DEMO_CATALOGUE,
+  OrderStatus,
   type KitchenCatalogue,
   type PrepPlan,
 } from '@nappe/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { OrderSubstitutionEntity } from '../src/allergy-notes/entities/order-substitution.entity.js';
 import { withDemoUuids } from '../src/database/demo-catalogue-seed.js';
+import { OrderEventEntity } from '../src/orders/entities/order-event.entity.js';
 import { OrderEntity } from '../src/orders/entities/order.entity.js';
 import { StudioSettings } from '../src/studio/entities/studio-settings.entity.js';
 import { bearer } from './factories/booking.js';
@@ -287,5 +290,149 @@ describe('prep schedule, ticks and labels', () => {
     await d.t.http.get('/api/prep/schedule').set(bearer(d.client)).expect(403);
     await d.t.http.post('/api/ingredients').set(bearer(d.staff)).send({}).expect(403);
     await d.t.http.post('/api/menus').set(bearer(d.staff)).send({}).expect(403);
+  });
+});
+
+/**
+ * Another confirmed order for `eventDate`, cloned from a demo order on the same menu, with its
+ * confirmation written to the audit trail at `confirmedAt`.
+ */
+async function confirmedClone(
+  template: OrderEntity,
+  changes: Pick<OrderEntity, 'eventDate' | 'serviceTime' | 'guestCount'>,
+  confirmedAt: Date,
+): Promise<string> {
+  const id = randomUUID();
+  await d.t.dataSource.getRepository(OrderEntity).insert({
+    ...template,
+    ...changes,
+    id,
+    reference: `T-${id.slice(0, 8).toUpperCase()}`,
+    clientRequestId: randomUUID(),
+    status: OrderStatus.Confirmed,
+  });
+  await d.t.dataSource.getRepository(OrderEventEntity).insert({
+    id: randomUUID(),
+    orderId: id,
+    seq: 1,
+    actorUserId: null,
+    actorRole: 'chef',
+    fromStatus: OrderStatus.Requested,
+    toStatus: OrderStatus.Confirmed,
+    summary: 'Confirmed (test record)',
+    reason: null,
+    at: confirmedAt,
+  });
+  return id;
+}
+
+interface ScheduleBody {
+  tasks: Array<{
+    taskKey: string;
+    recipeId: string;
+    batches: number;
+    orderIds: string[];
+    done: { by: string; at: string; batches: number } | null;
+  }>;
+  conflicts: Array<{
+    kind: string;
+    orderId?: string;
+    checkedFrom?: string;
+    checkedFromAt?: string;
+    readyAt?: string;
+    neededByAt?: string;
+    message: string;
+  }>;
+}
+
+describe('ticks and lead times as orders come in', () => {
+  it('keeps a tick when another order joins the batch, and shows the batches added since', async () => {
+    const plan = await getPlan(d.chef);
+    // A run on plates with equipment: more guests on its event means more batches.
+    const row = plan.days
+      .flatMap((day) => day.recipes.map((r) => ({ day: day.date, r })))
+      .find(({ r }) => r.equipment && r.onPlates && r.orderIds.length > 0)!;
+    expect(row, 'the demo plan has a run limited by its equipment').toBeDefined();
+    const read = async () =>
+      (await d.t.http.get(`/api/prep/schedule?date=${row.day}`).set(bearer(d.staff)).expect(200))
+        .body as ScheduleBody;
+    const before = (await read()).tasks.find(
+      (t) => t.recipeId === row.r.recipeId && t.orderIds.join() === [...row.r.orderIds].join(),
+    )!;
+    await d.t.http.post(`/api/prep/tasks/${before.taskKey}/done`).set(bearer(d.staff)).expect(200);
+
+    const template = await d.t.dataSource
+      .getRepository(OrderEntity)
+      .findOneByOrFail({ id: row.r.orderIds[0]! });
+    const joined = await confirmedClone(
+      template,
+      { eventDate: template.eventDate, serviceTime: template.serviceTime, guestCount: 400 },
+      d.clock.now(),
+    );
+    const after = (await read()).tasks.find((t) => t.taskKey === before.taskKey)!;
+    expect(after.orderIds).toContain(joined);
+    expect(after.batches).toBeGreaterThan(before.batches);
+    expect(after.done).toMatchObject({ by: 'Idris Okafor', batches: before.batches });
+    await d.t.dataSource.getRepository(OrderEntity).update(
+      { id: joined },
+      {
+        status: OrderStatus.Cancelled,
+      },
+    );
+  });
+
+  it('flags on today’s schedule and dashboard an order confirmed too late, not one confirmed in time', async () => {
+    const studio = await d.t.dataSource.getRepository(StudioSettings).findOneByOrFail({ id: 1 });
+    const today = dateInTimeZone(d.clock.now(), studio.timeZone);
+    const tomorrow = addIsoDays(today, 1);
+    // 17:55 UTC is 18:55 (winter) or 19:55 (summer) in Brussels: any hands-on work can start
+    // only at 07:00 tomorrow, when plating for an 08:00 service must already begin.
+    const confirmedNow = new Date(`${today}T17:55:00.000Z`);
+    d.clock.set(confirmedNow);
+    try {
+      const template = await d.t.dataSource
+        .getRepository(OrderEntity)
+        .findOneByOrFail({ status: OrderStatus.Confirmed });
+      const slot = { eventDate: tomorrow, serviceTime: '08:00', guestCount: 12 };
+      const late = await confirmedClone(template, slot, confirmedNow);
+      const early = await confirmedClone(
+        template,
+        slot,
+        new Date(confirmedNow.getTime() - 10 * 24 * 3600_000),
+      );
+
+      const body = (await d.t.http.get('/api/prep/schedule').set(bearer(d.staff)).expect(200))
+        .body as ScheduleBody;
+      const leadTime = body.conflicts.filter((c) => c.kind === 'lead_time');
+      expect(leadTime.length).toBeGreaterThan(0);
+      for (const c of leadTime) {
+        expect(c.orderId).toBe(late);
+        expect(c.checkedFrom).toBe('confirmation');
+        expect(Date.parse(c.checkedFromAt!)).toBe(confirmedNow.getTime());
+        expect(Date.parse(c.readyAt!)).toBeGreaterThan(Date.parse(c.neededByAt!));
+        expect(c.message).toMatch(/Started when the order was confirmed/);
+      }
+      // Another day lists only conflicts of its own tasks.
+      const later = (
+        await d.t.http
+          .get(`/api/prep/schedule?date=${addIsoDays(today, 2)}`)
+          .set(bearer(d.staff))
+          .expect(200)
+      ).body as ScheduleBody;
+      expect(later.conflicts.filter((c) => c.orderId === late)).toEqual([]);
+
+      const dash = await d.t.http.get('/api/insights/dashboard').set(bearer(d.chef)).expect(200);
+      const alerts = dash.body.alerts as Array<{ kind: string; orderId: string }>;
+      const alert = alerts.find((a) => a.kind === 'lead_time' && a.orderId === late);
+      // One alert for the order, however many of its components are late.
+      expect((alert as { message?: string } | undefined)?.message).toMatch(
+        /cannot be ready in time/,
+      );
+      expect(alerts.some((a) => a.kind === 'lead_time' && a.orderId === early)).toBe(false);
+      // The demo's own orders were confirmed days ahead: none of them is late.
+      expect(alerts.filter((a) => a.kind === 'lead_time').map((a) => a.orderId)).toEqual([late]);
+    } finally {
+      d.clock.set(new Date());
+    }
   });
 });

@@ -50,7 +50,7 @@ export interface PrepApiOptions {
 export interface PrepApiState {
   /** Every prep and orders request: its URL and the Authorization header it carried. */
   requests: Array<{ url: URL; auth: string | null }>;
-  ticks: Map<string, { by: string; at: string }>;
+  ticks: Map<string, { by: string; at: string; batches: number }>;
   /** When set, tick and untick answer with this status and message. */
   tickFailure: { status: number; message: string } | null;
   /** When set, tick and untick wait for it before answering (to see the optimistic state). */
@@ -181,7 +181,12 @@ export function createPrepApi(options: PrepApiOptions) {
           { status: 404 },
         );
       }
-      if (done) state.ticks.set(key, { by: options.user.name, at: new Date().toISOString() });
+      if (done)
+        state.ticks.set(key, {
+          by: options.user.name,
+          at: new Date().toISOString(),
+          batches: task.batches,
+        });
       else state.ticks.delete(key);
       return HttpResponse.json({ ...task, done: state.ticks.get(key) ?? null });
     };

@@ -20,6 +20,7 @@ import { KitchenCatalogueService } from '../kitchen/catalogue/kitchen-catalogue.
 import { OrderGuestEntity } from '../orders/entities/order-guest.entity.js';
 import { OrderEntity } from '../orders/entities/order.entity.js';
 import { balanceOf, summarizeLedger } from '../orders/order-money.js';
+import { confirmationTimes } from '../orders/order-records.js';
 import { PaymentEntity } from '../payments/entities/payment.entity.js';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
@@ -268,6 +269,7 @@ export class InsightsService {
     const payments = await m.findBy(PaymentEntity, { orderId: In(ids) });
     const guests = await m.findBy(OrderGuestEntity, { orderId: In(ids) });
     const subs = await m.findBy(OrderSubstitutionEntity, { orderId: In(ids) });
+    const confirmedAt = await confirmationTimes(m, ids);
     const alerts: DashboardAlert[] = [];
     const settings = {
       studioTimeZone: studio.timeZone,
@@ -285,10 +287,23 @@ export class InsightsService {
           prepOrderOf(o, studio.timeZone, ownGuests, ownSubs),
           settings,
           now.toISOString(),
+          // A confirmed order is checked from its confirmation: work under way is not late.
+          o.status === OrderStatus.Confirmed ? confirmedAt[o.id] : undefined,
         );
-        for (const c of late)
-          if (c.kind === 'lead_time')
-            alerts.push({ kind: 'lead_time', ...base, message: c.message });
+        const leadTime = late.filter((c) => c.kind === 'lead_time');
+        // One alert per order: the component latest to be ready explains, the others are named.
+        const worst = leadTime.reduce<(typeof leadTime)[number] | undefined>(
+          (w, c) => (!w || c.lateByMinutes > w.lateByMinutes ? c : w),
+          undefined,
+        );
+        if (worst) {
+          const names = [...new Set(leadTime.map((c) => c.recipeName))];
+          const message =
+            names.length === 1
+              ? worst.message
+              : `${names.length} components of ${o.reference} cannot be ready in time: ${names.join(', ')}. The latest: ${worst.message}`;
+          alerts.push({ kind: 'lead_time', ...base, message });
+        }
       } catch (error) {
         if (!isKitchenError(error)) throw error;
         alerts.push({

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { ConflictException, NotFoundException } from '@nestjs/common';
-import { Role, transition, type OrderActor, type OrderStatus } from '@nappe/shared';
-import type { EntityManager } from 'typeorm';
+import { OrderStatus, Role, transition, type OrderActor } from '@nappe/shared';
+import { In, type EntityManager } from 'typeorm';
 import type { Principal } from '../auth/principal.js';
 import { OrderEventEntity, type OrderEventActorRole } from './entities/order-event.entity.js';
 import { OrderEntity } from './entities/order.entity.js';
@@ -118,4 +118,26 @@ export async function transitionOrder(
   order.status = to;
   Object.assign(order, changes);
   await recordEvent(manager, now, order.id, actor, { from, to, ...event });
+}
+
+/**
+ * When each order was last confirmed, from the audit trail: the moment work on it could begin,
+ * from which its lead time is checked once it is confirmed.
+ */
+export async function confirmationTimes(
+  manager: EntityManager,
+  orderIds: readonly string[],
+): Promise<Record<string, string>> {
+  if (orderIds.length === 0) return {};
+  const rows = await manager.find(OrderEventEntity, {
+    select: { orderId: true, at: true },
+    where: { orderId: In([...orderIds]), toStatus: OrderStatus.Confirmed },
+  });
+  const times: Record<string, string> = {};
+  for (const row of rows) {
+    const at = new Date(row.at).toISOString();
+    const known = times[row.orderId];
+    if (!known || at > known) times[row.orderId] = at;
+  }
+  return times;
 }

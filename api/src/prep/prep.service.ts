@@ -21,11 +21,12 @@ import {
 } from '../kitchen/catalogue/kitchen-catalogue.service.js';
 import { OrderGuestEntity } from '../orders/entities/order-guest.entity.js';
 import { OrderEntity } from '../orders/entities/order.entity.js';
+import { confirmationTimes } from '../orders/order-records.js';
 import { OrderGuestSummaryEntity } from '../privacy/entities/order-guest-summary.entity.js';
 import { keptPlateChanges } from '../privacy/guest-retention.js';
 import { loadStudio } from '../studio/booking-settings.js';
 import { PrepTaskTickEntity } from './entities/prep-task-tick.entity.js';
-import { dateOfTaskKey, prepTaskKey } from './prep-task-key.js';
+import { dateOfTaskKey, prepTaskKeys } from './prep-task-key.js';
 import type { ComponentLabel, PrepDaySchedule, PrepPlanView, ScheduledTask } from './prep.types.js';
 
 /** How far ahead of a production day the schedule looks for events it prepares. */
@@ -62,7 +63,11 @@ export class PrepService {
     private readonly clock: Clock,
   ) {}
 
-  private async compute(m: EntityManager, from: string, to: string): Promise<PrepPlan> {
+  /**
+   * The plan for [from, to]. With `now`, lead times are checked too: each confirmed order from
+   * the moment it was confirmed (work under way since then is not flagged again).
+   */
+  private async compute(m: EntityManager, from: string, to: string, now?: Date): Promise<PrepPlan> {
     const studio = await loadStudio(m);
     const { index } = await this.catalogue.load(m);
     const orders = await m.find(OrderEntity, {
@@ -92,12 +97,16 @@ export class PrepService {
         ? input
         : { ...input, guestChanges: [...(input.guestChanges ?? []), ...keptChanges] };
     });
+    const leadTime = now
+      ? { now: now.toISOString(), leadTimeFrom: await confirmationTimes(m, ids) }
+      : {};
     return computeView(() =>
       planPrep(index, inputs, {
         from,
         to,
         settings: { studioTimeZone: studio.settings.timeZone },
         sparePercent: studio.settings.sparePercent,
+        ...leadTime,
       }),
     );
   }
@@ -123,19 +132,23 @@ export class PrepService {
     return { ...(costsShown ? plan : withoutCosts(plan)), costsShown };
   }
 
-  /** The production day `date`: its tasks in order, with ticks, conflicts and warnings. */
+  /**
+   * The production day `date`: its tasks in order, with ticks, conflicts and warnings. Lead-time
+   * conflicts are checked against now; the studio's today lists every one still open, since a
+   * component confirmed too late may have had to start on a day already past.
+   */
   async schedule(date?: string): Promise<PrepDaySchedule> {
-    const day = date ?? (await this.today());
+    const now = this.clock.now();
+    const today = await this.today();
+    const day = date ?? today;
     if (!isIsoDate(day)) throw badDate('the date');
     return this.dataSource.transaction(async (m) => {
-      const plan = await this.compute(m, day, addIsoDays(day, SCHEDULE_HORIZON_DAYS));
+      const plan = await this.compute(m, day, addIsoDays(day, SCHEDULE_HORIZON_DAYS), now);
       const found = plan.schedule.days.find((d) => d.date === day);
       const tasks = found?.tasks ?? [];
-      const keyed = tasks.map((task) => ({ task, taskKey: prepTaskKey(day, task) }));
-      const ticks = keyed.length
-        ? await m.find(PrepTaskTickEntity, {
-            where: { taskKey: In(keyed.map((k) => k.taskKey)) },
-          })
+      const keys = prepTaskKeys(day, tasks);
+      const ticks = keys.length
+        ? await m.find(PrepTaskTickEntity, { where: { taskKey: In(keys) } })
         : [];
       const tickOf = new Map(ticks.map((t) => [t.taskKey, t]));
       const runIds = new Set(tasks.map((t) => t.runId));
@@ -143,15 +156,24 @@ export class PrepService {
         date: day,
         timeZone: plan.schedule.timeZone,
         activeMinutes: found?.activeMinutes ?? 0,
-        tasks: keyed.map(({ task, taskKey }): ScheduledTask => {
+        tasks: tasks.map((task, i): ScheduledTask => {
+          const taskKey = keys[i]!;
           const tick = tickOf.get(taskKey);
           return {
             ...task,
             taskKey,
-            done: tick ? { by: tick.doneByName, at: new Date(tick.doneAt).toISOString() } : null,
+            done: tick
+              ? {
+                  by: tick.doneByName,
+                  at: new Date(tick.doneAt).toISOString(),
+                  batches: tick.batches ?? task.batches,
+                }
+              : null,
           };
         }),
-        conflicts: plan.schedule.conflicts.filter((c) => runIds.has(c.runId)),
+        conflicts: plan.schedule.conflicts.filter(
+          (c) => runIds.has(c.runId) || (c.kind === 'lead_time' && day === today),
+        ),
         warnings: plan.schedule.warnings.filter((w) =>
           tasks.some((t) => t.recipeId === w.recipeId),
         ),
@@ -179,12 +201,13 @@ export class PrepService {
         productionDate: dateOfTaskKey(taskKey)!,
         recipeId: task.recipeId,
         stepIndex: task.stepIndex,
+        batches: task.batches,
         doneBy: principal.id,
         doneByName: principal.name,
         doneAt: at,
       });
     });
-    return { ...task, done: { by: principal.name, at: at.toISOString() } };
+    return { ...task, done: { by: principal.name, at: at.toISOString(), batches: task.batches } };
   }
 
   async untick(taskKey: string): Promise<ScheduledTask> {

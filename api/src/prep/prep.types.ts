@@ -4,9 +4,10 @@ import type { PrepConflict, PrepPlan, PrepTask, PrepWarning, LabelSegment } from
 export type PrepPlanView = PrepPlan & { costsShown: boolean };
 
 export interface ScheduledTask extends PrepTask {
-  /** Stable across re-plans: production date, recipe, step, batch part and orders. */
+  /** Stable across re-plans: production date, recipe, step, batch part and run of the day. */
   taskKey: string;
-  done: { by: string; at: string } | null;
+  /** Who ticked it, when, and for how many batches (fewer than `batches` if orders joined since). */
+  done: { by: string; at: string; batches: number } | null;
 }
 
 export interface PrepDaySchedule {

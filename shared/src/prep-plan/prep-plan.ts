@@ -75,6 +75,8 @@ export interface PrepPlanOptions {
   sparePercent?: number;
   /** ISO date-time with offset: check every order's lead time as if nothing has been started. */
   now?: string;
+  /** Per order id, when it was confirmed: its lead time is checked from then (see `scheduleRuns`). */
+  leadTimeFrom?: Readonly<Record<string, string>>;
 }
 
 export interface PlannedDessertPlates {
@@ -493,6 +495,7 @@ export function planPrep(
   const schedule = scheduleRuns(runs, settings, {
     timings,
     ...(options.now !== undefined ? { now: options.now } : {}),
+    ...(options.leadTimeFrom !== undefined ? { leadTimeFrom: options.leadTimeFrom } : {}),
   });
   const runSchedules = new Map(schedule.runs.map((r) => [r.runId, r]));
 
@@ -611,14 +614,15 @@ export function planPrep(
 }
 
 /**
- * The lead-time conflicts of one order planned on its own, as if nothing were started yet: what
- * the chef sees before confirming it.
+ * The lead-time conflicts of one order planned on its own: what the chef sees before confirming
+ * it (checked from `now`), or, once it is confirmed, from the moment it was (`confirmedAt`).
  */
 export function checkOrderLeadTime(
   index: KitchenIndex,
   order: PrepOrderInput,
   settings: PrepSettingsInput,
   now: string,
+  confirmedAt?: string,
 ): PrepConflict[] {
   const parsed = parseOrder(order);
   return planPrep(index, [parsed], {
@@ -626,5 +630,6 @@ export function checkOrderLeadTime(
     to: parsed.eventDate,
     settings,
     now,
+    ...(confirmedAt !== undefined ? { leadTimeFrom: { [parsed.id]: confirmedAt } } : {}),
   }).schedule.conflicts;
 }

@@ -36,10 +36,13 @@ import {
  * - **Earliest start by shelf life.** A run is finished when its last step's wait ends and
  *   keeps `shelfLifeHours` from then; started too early, it expires before its last use. The
  *   earliest start is the earliest moment from which working forward still ends late enough.
- * - **Conflicts.** With `now`, every plate use is checked: started now, is the component
- *   (with its sub-recipes) ready by the plating time? If not, a message says why, by how much
- *   and by when it had to start. A run that expires before a use, and a cooling step longer
- *   than FDA Food Code §3-501.14(A) allows, are reported too.
+ * - **Conflicts.** With `now`, every plate use of a service still to come is checked: started
+ *   from the moment the order could first be worked on, is the component (with its sub-recipes)
+ *   ready by the plating time? If not, a message says why, by how much and by when it had to
+ *   start. That moment is `now` for an order not yet confirmed, and the moment it was confirmed
+ *   for a confirmed one (`leadTimeFrom`): work under way since then is not flagged again, while
+ *   an order confirmed too late stays flagged until its service. A run that expires before a
+ *   use, and a cooling step longer than FDA Food Code §3-501.14(A) allows, are reported too.
  *
  * Not modelled: who does the work. Two runs may be scheduled at the same minute; the day's
  * task list shows them side by side for the chef to share out.
@@ -375,6 +378,9 @@ export type PrepConflict =
   | {
       kind: 'lead_time';
       orderId: string;
+      /** What the readiness was worked from: now, or when the order was confirmed. */
+      checkedFrom: 'now' | 'confirmation';
+      checkedFromAt: string;
       runId: string;
       recipeId: string;
       recipeName: string;
@@ -494,6 +500,12 @@ function stepCaution(step: MethodStep): string | undefined {
 export interface ScheduleRunsOptions {
   /** ISO date-time with offset: check lead times as if nothing has been started yet. */
   now?: string;
+  /**
+   * Per order id, when the order was confirmed (ISO date-time with offset): its lead time is
+   * checked from then instead of from `now`, since work on it may have begun at that moment.
+   * Orders not listed are checked from `now`. Used only with `now`.
+   */
+  leadTimeFrom?: Readonly<Record<string, string>>;
   /** Timings already worked out (the plan passes its own, to avoid working them twice). */
   timings?: ReadonlyMap<string, RunTiming>;
 }
@@ -677,7 +689,11 @@ export function scheduleRuns(
   let now: EpochMinutes | undefined;
   if (options.now !== undefined) {
     now = parseInstant(options.now, 'The current time');
-    conflicts.push(...leadTimeConflicts(runs, timings, calendar, now));
+    const from = new Map<string, EpochMinutes>();
+    for (const [orderId, at] of Object.entries(options.leadTimeFrom ?? {})) {
+      from.set(orderId, parseInstant(at, `The confirmation time of order ${orderId}`));
+    }
+    conflicts.push(...leadTimeConflicts(runs, timings, calendar, now, from));
   }
 
   tasks.sort(
@@ -720,19 +736,25 @@ function leadTimeConflicts(
   timings: ReadonlyMap<string, RunTiming>,
   calendar: WorkingCalendar,
   now: EpochMinutes,
+  confirmedAt: ReadonlyMap<string, EpochMinutes>,
 ): PrepConflict[] {
-  const memo = new Map<string, Readiness>();
-  const open = new Set<string>();
-  const readyFromNow = (runId: string): Readiness => {
+  // One memo per starting moment: orders confirmed at different times are worked separately.
+  const memos = new Map<EpochMinutes, Map<string, Readiness>>();
+  const readyFrom = (start: EpochMinutes, runId: string, open = new Set<string>()): Readiness => {
+    let memo = memos.get(start);
+    if (!memo) {
+      memo = new Map();
+      memos.set(start, memo);
+    }
     const known = memo.get(runId);
     if (known) return known;
     if (open.has(runId)) throw new PrepInputError(`Runs use each other in a loop at ${runId}.`);
     open.add(runId);
     const run = timings.get(runId)!.run;
-    let from = now;
+    let from = start;
     let via: string | undefined;
     for (const sub of run.subRunIds) {
-      const r = readyFromNow(sub);
+      const r = readyFrom(start, sub, open);
       if (r.finish > from) {
         from = r.finish;
         via = sub;
@@ -750,8 +772,11 @@ function leadTimeConflicts(
   for (const run of runs) {
     for (const use of run.uses) {
       if (!use.orderId || use.usedAt <= now) continue;
-      const ready = readyFromNow(run.runId);
+      const confirmed = confirmedAt.get(use.orderId);
+      const start = confirmed ?? now;
+      const ready = readyFrom(start, run.runId);
       if (ready.finish <= use.neededBy) continue;
+      const memo = memos.get(start)!;
 
       // The chain that held it back, to name its longest wait and when it had to start.
       let longest: { step: MethodStep; recipe: Recipe } | undefined;
@@ -774,6 +799,8 @@ function leadTimeConflicts(
       conflicts.push({
         kind: 'lead_time',
         orderId: use.orderId,
+        checkedFrom: confirmed === undefined ? 'now' : 'confirmation',
+        checkedFromAt: toZonedIso(start, tz),
         runId: run.runId,
         recipeId: run.recipe.id,
         recipeName: run.recipe.name,
@@ -784,7 +811,7 @@ function leadTimeConflicts(
         latestStartAt: toZonedIso(mustStart, tz),
         message:
           `“${run.recipe.name}” for order ${use.orderId} cannot be ready in time.${wait}` +
-          ` Started now (${formatForChef(now, tz)}), with hands-on work between ${calendar.hours.start} and ${calendar.hours.end}, it is ready ${formatForChef(ready.finish, tz)} —` +
+          ` ${confirmed === undefined ? 'Started now' : 'Started when the order was confirmed'} (${formatForChef(start, tz)}), with hands-on work between ${calendar.hours.start} and ${calendar.hours.end}, it is ready ${formatForChef(ready.finish, tz)} —` +
           ` ${formatDurationForChef(late)} after plating must begin (${formatForChef(use.neededBy, tz)}) for service at ${formatForChef(use.usedAt, serviceTz)}.` +
           ` It had to start by ${formatForChef(mustStart, tz)}. Move the service, agree a later date, or leave the component out.`,
       });

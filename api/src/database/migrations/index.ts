@@ -5,6 +5,7 @@ import { OrdersAndPayments1764892800000 } from './1764892800000-orders-and-payme
 import { AllergyNotesAndPrep1765200000000 } from './1765200000000-allergy-notes-and-prep.js';
 import { SettingsAndTeam1765100000000 } from './1765100000000-settings-and-team.js';
 import { GuestDataPrivacy1765460000000 } from './1765460000000-guest-data-privacy.js';
+import { PrepTickBatches1765600000000 } from './1765600000000-prep-tick-batches.js';
 
 /** Every migration, in order. Listed as classes (a glob does not work with ESM builds). */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   SettingsAndTeam1765100000000,
   AllergyNotesAndPrep1765200000000,
   GuestDataPrivacy1765460000000,
+  PrepTickBatches1765600000000,
 ];

@@ -1,6 +1,6 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 
-/** A prep task ticked done: who and when. The key is stable across re-plans (prep-task-key.ts). */
+/** A prep task ticked done: who, when, and for how many batches. The key is stable across re-plans (prep-task-key.ts). */
 @Entity({ name: 'prep_task_ticks' })
 export class PrepTaskTickEntity {
   @PrimaryColumn({ name: 'task_key', type: 'varchar', length: 64 })
@@ -14,6 +14,10 @@ export class PrepTaskTickEntity {
 
   @Column({ name: 'step_index', type: 'integer' })
   stepIndex: number;
+
+  /** The batches the task had when it was ticked; the schedule shows any added since. */
+  @Column({ type: 'integer', nullable: true })
+  batches: number | null;
 
   @Column({ name: 'done_by', type: 'varchar', length: 36, nullable: true })
   doneBy: string | null;

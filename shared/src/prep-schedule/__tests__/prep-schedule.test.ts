@@ -252,6 +252,46 @@ describe('lead time: an order confirmed Monday evening for a Tuesday brunch', ()
     expect(s.conflicts).toEqual([]);
   });
 
+  it('a confirmed order is checked from its confirmation: work started then is not flagged later', () => {
+    // Confirmed Monday 08:00: cooked and cooled by 09:00, rested until 15:30, churned and firm
+    // well before Tuesday 08:00. At 18:45 that evening the base is resting, not late.
+    const s = scheduleRuns([runOf(restedBase, service)], settings, {
+      now: '2026-03-23T18:45:00+01:00',
+      leadTimeFrom: { 'order-1': '2026-03-23T08:00:00+01:00' },
+    });
+    expect(s.conflicts).toEqual([]);
+  });
+
+  it('an order confirmed too late stays flagged, worked from the confirmation', () => {
+    const s = scheduleRuns([runOf(restedBase, service)], settings, {
+      now: '2026-03-24T07:30:00+01:00',
+      leadTimeFrom: { 'order-1': '2026-03-23T18:45:00+01:00' },
+    });
+    expect(s.conflicts).toHaveLength(1);
+    const c = s.conflicts[0]!;
+    if (c.kind !== 'lead_time') throw new Error('expected a lead-time conflict');
+    // The same hand-worked figures as "now = 18:45 Monday" above.
+    expect(c.checkedFrom).toBe('confirmation');
+    expect(c.checkedFromAt).toBe('2026-03-23T18:45:00+01:00');
+    expect(c.readyAt).toBe('2026-03-24T15:20:00+01:00');
+    expect(c.lateByMinutes).toBe(7 * 60 + 20);
+    expect(c.message).toContain(
+      'Started when the order was confirmed (Mon 23 Mar 18:45), with hands-on work',
+    );
+  });
+
+  it('orders not listed in leadTimeFrom are still checked from now', () => {
+    const s = scheduleRuns([runOf(restedBase, service)], settings, {
+      now: '2026-03-23T18:45:00+01:00',
+      leadTimeFrom: { 'another-order': '2026-03-20T08:00:00+01:00' },
+    });
+    const c = s.conflicts[0];
+    expect(c?.kind === 'lead_time' ? [c.checkedFrom, c.checkedFromAt] : []).toEqual([
+      'now',
+      '2026-03-23T18:45:00+01:00',
+    ]);
+  });
+
   it('ignores uses whose service is already past', () => {
     const s = scheduleRuns([runOf(restedBase, service)], settings, {
       now: '2026-03-24T10:00:00+01:00',

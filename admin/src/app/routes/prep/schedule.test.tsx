@@ -68,7 +68,7 @@ describe('Prep → Schedule', () => {
     await waitFor(() => expect(within(task).queryByText(/saving…/)).not.toBeInTheDocument());
     expect(checkbox).toBeChecked();
     expect([...api.state.ticks.values()]).toEqual([
-      { by: 'Tomás Reyes', at: expect.any(String) as string },
+      { by: 'Tomás Reyes', at: expect.any(String) as string, batches: 1 },
     ]);
     expect(screen.getByText(/1 of \d+ done/)).toBeVisible();
   });
@@ -98,10 +98,11 @@ describe('Prep → Schedule', () => {
     const { api, user } = renderPrep(MONDAY, { events });
     // Ticked by a colleague at 09:15 in Paris (08:15 UTC in March, CET = UTC+1).
     const key = api.schedule('2026-03-23').tasks.find((t) => t.stepIndex === 1)!.taskKey;
-    api.state.ticks.set(key, { by: 'Tomás Reyes', at: '2026-03-23T08:15:00.000Z' });
+    api.state.ticks.set(key, { by: 'Tomás Reyes', at: '2026-03-23T08:15:00.000Z', batches: 1 });
     const checkbox = await screen.findByRole('checkbox', { name: CUSTARD }, FIRST);
     expect(checkbox).toBeChecked();
     expect(within(taskOf(checkbox)).getByText('by Tomás Reyes at 09:15')).toBeVisible();
+    expect(within(taskOf(checkbox)).queryByText(/Make \d+ more/)).toBeNull();
 
     checkbox.focus();
     await user.keyboard(' ');
@@ -109,6 +110,28 @@ describe('Prep → Schedule', () => {
     await waitFor(() => expect(api.state.ticks.size).toBe(0));
     expect(api.state.requests.some((r) => r.url.pathname === `/api/prep/tasks/${key}/done`)).toBe(
       true,
+    );
+  });
+
+  it('says how many batches to add when orders joined a task after it was ticked', async () => {
+    // 200 guests: more custard than the machine takes at once.
+    const { api } = renderPrep(MONDAY, { events: [{ ...ENGAGEMENT, guestCount: 200 }] });
+    const task = api.schedule('2026-03-23').tasks.find((t) => t.batches >= 2)!;
+    expect(task, 'a task of several batches on Monday').toBeDefined();
+    // The server keeps the tick when another order joins the batch, with the batches ticked.
+    api.state.ticks.set(task.taskKey, {
+      by: 'Tomás Reyes',
+      at: '2026-03-23T08:15:00.000Z',
+      batches: task.batches - 1,
+    });
+    const checkbox = await screen.findByRole(
+      'checkbox',
+      { name: new RegExp(`^Done: ${task.stepName.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) },
+      FIRST,
+    );
+    expect(checkbox).toBeChecked();
+    expect(within(taskOf(checkbox)).getByText(/^Ticked for/)).toHaveTextContent(
+      `Ticked for ${task.batches - 1} batch${task.batches === 2 ? '' : 'es'}; orders confirmed since need ${task.batches}. Make 1 more batch.`,
     );
   });
 

@@ -38,11 +38,16 @@ export function useTickPrepTask(date: string, me: string) {
     mutationFn: ({ taskKey, done }: TickVariables) => setTaskDone(taskKey, done),
     onMutate: async ({ taskKey, done }) => {
       await queryClient.cancelQueries({ queryKey: prepKeys.schedule(date) });
-      const before = queryClient
+      const task = queryClient
         .getQueryData<PrepDaySchedule>(prepKeys.schedule(date))
-        ?.tasks.find((t) => t.taskKey === taskKey)?.done;
-      patchTask(queryClient, date, taskKey, done ? { by: me, at: new Date().toISOString() } : null);
-      return { before: before ?? null };
+        ?.tasks.find((t) => t.taskKey === taskKey);
+      patchTask(
+        queryClient,
+        date,
+        taskKey,
+        done ? { by: me, at: new Date().toISOString(), batches: task?.batches ?? 1 } : null,
+      );
+      return { before: task?.done ?? null };
     },
     onError: (_error, { taskKey }, context) => {
       patchTask(queryClient, date, taskKey, context?.before ?? null);

@@ -39,10 +39,12 @@ export interface PrepPlanView {
   costsShown: boolean;
 }
 
-/** Who ticked a task done, and when (an ISO instant). */
+/** Who ticked a task done, when (an ISO instant), and for how many batches. */
 export interface TaskTick {
   by: string;
   at: string;
+  /** The task's batches when ticked: fewer than now if orders joined the batch since. */
+  batches: number;
 }
 
 export interface ScheduledTask extends PrepTask {

@@ -184,6 +184,13 @@ export function TaskCard({
                 )}
               </Text>
             )}
+            {task.done && task.done.batches < task.batches && (
+              <Text color="fg.warning" fontWeight="semibold">
+                Ticked for {plural(task.done.batches, 'batch', 'batches')}; orders confirmed since
+                need {task.batches}. Make{' '}
+                {plural(task.batches - task.done.batches, 'more batch', 'more batches')}.
+              </Text>
+            )}
           </Box>
         </Flex>
         {tick.isError && (
