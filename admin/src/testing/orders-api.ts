@@ -215,6 +215,20 @@ export function createOrdersApi(orders: FixtureOrder[]) {
         advisoryCount: 0,
       });
     }),
+    // As OrdersController.receipt: a settled payment's receipt, named by the order's reference.
+    http.get('/api/orders/:id/receipts/:file', async ({ request, params }) => {
+      await record(request);
+      const o = find(params.id);
+      const paymentId = String(params.file).replace(/\.pdf$/, '');
+      const payment = o?.detail.payments.find((p) => p.id === paymentId && p.receiptAvailable);
+      if (!o || !payment || request.headers.get('Authorization') === null) return notFound();
+      return new HttpResponse('%PDF-1.7 receipt', {
+        headers: {
+          'Content-Type': 'application/pdf',
+          'Content-Disposition': `inline; filename="receipt-${o.detail.reference}-${payment.kind}.pdf"`,
+        },
+      });
+    }),
     http.get('/api/orders/:id/access-log', async ({ request, params }) => {
       await record(request);
       const o = find(params.id);

@@ -198,3 +198,12 @@ export const ChevronDownIcon = /* @__PURE__ */ createIcon({
   displayName: 'ChevronDownIcon',
   path: <path {...stroke} d="M6 9.5l6 6 6-6" />,
 });
+
+/** A tray with an arrow dropping into it. */
+export const DownloadIcon = /* @__PURE__ */ createIcon({
+  displayName: 'DownloadIcon',
+  path: [
+    <path key="a" {...stroke} d="M12 3.5v11M7.5 10l4.5 4.5 4.5-4.5" />,
+    <path key="b" {...stroke} d="M4 15.5v3a2 2 0 0 0 2 2h12a2 2 0 0 0 2-2v-3" />,
+  ],
+});

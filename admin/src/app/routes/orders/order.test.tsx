@@ -88,6 +88,24 @@ describe('Order detail', () => {
     expect(access.getByText(/5 Mar 2026, 09:12/)).toBeInTheDocument();
   });
 
+  it('downloads a payment’s receipt with the chef’s token', async () => {
+    const clicks: string[] = [];
+    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (
+      this: HTMLAnchorElement,
+    ) {
+      clicks.push(this.download);
+    });
+    const { api, user } = renderOrders('/orders/ord-41', standardOrders());
+    const payments = await region('Payments and refunds');
+    await user.click(
+      payments.getByRole('button', { name: `Receipt for the deposit of ${DEPOSIT_18} (PDF)` }),
+    );
+    await waitFor(() => expect(clicks).toEqual(['receipt-N-2026-0041-deposit.pdf']));
+    expect(
+      api.state.requests.filter((r) => r.path.includes('/receipts/')).map((r) => r.path),
+    ).toEqual(['/api/orders/ord-41/receipts/ord-41-pay-1.pdf']);
+  });
+
   it('offers only what the status allows the chef', async () => {
     renderOrders('/orders/ord-38', standardOrders());
     await pageHeading('N-2026-0038');

@@ -7,7 +7,7 @@ import { useRecipeLabels } from '../../../features/prep/api/get-label-texts';
 import { prepPlanQueryOptions, usePrepPlan } from '../../../features/prep/api/get-prep-plan';
 import type { DateRange } from '../../../features/prep/api/types';
 import { DayPicker } from '../../../features/prep/components/day-picker';
-import { DownloadButton } from '../../../features/prep/components/download-button';
+import { DownloadButton } from '../../../components/ui/download-button';
 import { LabelPreview } from '../../../features/prep/components/label-preview';
 import { TagIcon } from '../../../features/prep/components/prep-icons';
 import {

@@ -9,7 +9,7 @@ import {
   usePrepPlan,
 } from '../../../features/prep/api/get-prep-plan';
 import type { DateRange } from '../../../features/prep/api/types';
-import { DownloadButton } from '../../../features/prep/components/download-button';
+import { DownloadButton } from '../../../components/ui/download-button';
 import { PlanView } from '../../../features/prep/components/plan-view';
 import {
   PrepEmpty,

@@ -26,6 +26,7 @@ import {
 } from '@nappe/shared';
 import type { ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router';
+import { DownloadButton } from '../../../components/ui/download-button';
 import { AllergyIcon } from '../../../components/ui/icons';
 import type { AccessLogEntry, AllergySummary, GuestDetailsRemoved } from '../api/types';
 import {
@@ -318,6 +319,7 @@ export function PaymentsSection({ order, timeZone }: { order: OrderDetail; timeZ
                   <Table.ColumnHeader>State</Table.ColumnHeader>
                   <Table.ColumnHeader textAlign="end">Amount</Table.ColumnHeader>
                   <Table.ColumnHeader>When</Table.ColumnHeader>
+                  <Table.ColumnHeader>Receipt</Table.ColumnHeader>
                 </Table.Row>
               </Table.Header>
               <Table.Body>
@@ -334,6 +336,23 @@ export function PaymentsSection({ order, timeZone }: { order: OrderDetail; timeZ
                     </Table.Cell>
                     <Table.Cell whiteSpace="nowrap">
                       {studioDateTime(p.settledAt ?? p.createdAt, timeZone)}
+                    </Table.Cell>
+                    <Table.Cell>
+                      {p.receiptAvailable ? (
+                        <DownloadButton
+                          path={`/orders/${encodeURIComponent(order.id)}/receipts/${encodeURIComponent(p.id)}.pdf`}
+                          fallbackName={`receipt-${order.reference}.pdf`}
+                          size="xs"
+                          variant="ghost"
+                          aria-label={`Receipt for the ${PAYMENT_KIND_LABELS[p.kind].toLowerCase()} of ${p.kind === 'refund' ? `−${money(p.amountMinor)}` : money(p.amountMinor)} (PDF)`}
+                        >
+                          PDF
+                        </DownloadButton>
+                      ) : (
+                        <Text as="span" color="fg.muted">
+                          —
+                        </Text>
+                      )}
                     </Table.Cell>
                   </Table.Row>
                 ))}

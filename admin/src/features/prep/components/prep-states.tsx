@@ -12,17 +12,7 @@ import {
   VisuallyHidden,
 } from '@chakra-ui/react';
 import type { ReactNode } from 'react';
-import { ApiError } from '../../../lib/api-client';
-
-/** The words for an error a person can act on. */
-export function errorMessage(error: unknown): string {
-  if (error instanceof ApiError) {
-    if (error.status === 0) return error.message;
-    if (error.status >= 500) return 'The server ran into a problem. Please try again in a moment.';
-    return error.messages.join(' ');
-  }
-  return 'Please try again in a moment.';
-}
+import { errorMessage } from '../../../lib/error-message';
 
 /** Something that could not be loaded, with a retry that works. */
 export function PrepLoadError({

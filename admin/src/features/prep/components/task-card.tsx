@@ -22,7 +22,7 @@ import {
   STEP_KIND_LABELS,
   when,
 } from '../lib/format';
-import { errorMessage } from './prep-states';
+import { errorMessage } from '../../../lib/error-message';
 import { ClockIcon, FrozenIcon } from './prep-icons';
 
 /** A caution without the closing deferral to the local food code: the list states that once. */

@@ -1,8 +1,8 @@
 import { Button, Stack, Text, type ButtonProps } from '@chakra-ui/react';
 import { useState, type ReactNode } from 'react';
-import { downloadFile } from '../api/download-file';
-import { errorMessage } from './prep-states';
-import { DownloadIcon } from './prep-icons';
+import { downloadFile } from '../../lib/download';
+import { errorMessage } from '../../lib/error-message';
+import { DownloadIcon } from './icons';
 
 /**
  * Downloads one of the API's documents with the signed-in person's token: busy while it comes,
