@@ -240,6 +240,21 @@ test('the chef filters the inbox, opens an order, confirms a request through the
   );
   await still(page, 'admin-order-detail');
 
+  // The deposit's receipt, fetched with the chef's token and saved under the order's reference.
+  const payments = page.getByRole('region', { name: 'Payments and refunds' });
+  const [receipt] = await Promise.all([
+    page.waitForEvent('download'),
+    payments.getByRole('button', { name: /^Receipt for the deposit of .+ \(PDF\)$/ }).click(),
+  ]);
+  expect(receipt.suggestedFilename()).toMatch(new RegExp(`${alreadyConfirmed.reference}.*\\.pdf$`));
+  const head = await new Promise<string>((resolve, reject) => {
+    void receipt.createReadStream().then((stream) => {
+      stream.once('data', (chunk: Buffer) => resolve(chunk.subarray(0, 5).toString('latin1')));
+      stream.once('error', reject);
+    }, reject);
+  });
+  expect(head).toBe('%PDF-');
+
   // Back keeps the filter.
   await page.goBack();
   await expect(page).toHaveURL(/[?&]status=confirmed/);

@@ -120,6 +120,24 @@ export function dateInTimeZone(instant: Date | number, timeZone: string): IsoDat
   return `${byType.year!.padStart(4, '0')}-${byType.month!}-${byType.day!}`;
 }
 
+const LONG_DATE: Intl.DateTimeFormatOptions = {
+  timeZone: 'UTC',
+  weekday: 'long',
+  day: 'numeric',
+  month: 'long',
+  year: 'numeric',
+};
+/** Building an Intl formatter costs far more than using one: one per locale, kept. */
+const longDateFormatters = new Map<string, Intl.DateTimeFormat>();
+function longDateFormatter(locale: string): Intl.DateTimeFormat {
+  let f = longDateFormatters.get(locale);
+  if (!f) {
+    f = new Intl.DateTimeFormat(locale, LONG_DATE);
+    longDateFormatters.set(locale, f);
+  }
+  return f;
+}
+
 /**
  * A date for people to read. Without a locale: English, "Sunday 21 June 2026", built from the
  * names Intl gives so the punctuation does not change with the runtime's CLDR version (some
@@ -127,16 +145,9 @@ export function dateInTimeZone(instant: Date | number, timeZone: string): IsoDat
  */
 export function formatIsoDate(date: IsoDate, locale?: string): string {
   const at = isoDayNumber(date) * MS_PER_DAY;
-  const options: Intl.DateTimeFormatOptions = {
-    timeZone: 'UTC',
-    weekday: 'long',
-    day: 'numeric',
-    month: 'long',
-    year: 'numeric',
-  };
-  if (locale) return new Intl.DateTimeFormat(locale, options).format(at);
+  if (locale) return longDateFormatter(locale).format(at);
   const byType: Record<string, string> = {};
-  for (const part of new Intl.DateTimeFormat('en-GB', options).formatToParts(at)) {
+  for (const part of longDateFormatter('en-GB').formatToParts(at)) {
     byType[part.type] = part.value;
   }
   return `${byType.weekday!} ${byType.day!} ${byType.month!} ${byType.year!}`;

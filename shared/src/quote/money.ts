@@ -115,14 +115,23 @@ export function minorToDecimalString(minor: number, currency: string): string {
  * An amount for people to read: 12345 EUR → "€123.45". The decimal string is handed to Intl as
  * a string, so no float ever stands between the integer and the text.
  */
+/** One formatter per locale and currency, kept: building one costs far more than using it. */
+const moneyFormatters = new Map<string, Intl.NumberFormat>();
+
 export function formatMoney(minor: number, currency: string, locale = 'en-GB'): string {
-  const digits = minorUnitDigits(currency);
-  return new Intl.NumberFormat(locale, {
-    style: 'currency',
-    currency,
-    minimumFractionDigits: digits,
-    maximumFractionDigits: digits,
-  }).format(minorToDecimalString(minor, currency) as Intl.StringNumericLiteral);
+  const key = `${locale}|${currency}`;
+  let formatter = moneyFormatters.get(key);
+  if (!formatter) {
+    const digits = minorUnitDigits(currency);
+    formatter = new Intl.NumberFormat(locale, {
+      style: 'currency',
+      currency,
+      minimumFractionDigits: digits,
+      maximumFractionDigits: digits,
+    });
+    moneyFormatters.set(key, formatter);
+  }
+  return formatter.format(minorToDecimalString(minor, currency) as Intl.StringNumericLiteral);
 }
 
 /** A rate in basis points for people to read: 2100 → "21 %", 550 → "5.5 %", 887 → "8.87 %". */
