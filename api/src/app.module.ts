@@ -14,7 +14,7 @@ import { ConfigModule } from './config/config.module.js';
 import { Env } from './config/env.js';
 import { DatabaseModule } from './database/database.module.js';
 import { FilesModule } from './files/files.module.js';
-import { HealthController } from './health/health.controller.js';
+import { HealthModule } from './health/health.module.js';
 import { KitchenModule } from './kitchen/kitchen.module.js';
 import { OrdersModule } from './orders/orders.module.js';
 import { StudioModule } from './studio/studio.module.js';
@@ -42,8 +42,8 @@ import { InsightsModule } from './insights/insights.module.js';
     AllergyNotesModule,
     PrepModule,
     PrivacyModule,
+    HealthModule,
   ],
-  controllers: [HealthController],
   providers: [
     ShutdownState,
     // Order matters: throttle first, then authenticate, then authorise.

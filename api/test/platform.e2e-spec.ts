@@ -69,10 +69,35 @@ describe('deny by default (QUALITY.md, OWASP API Security Top 10 2023 API5)', ()
   });
 });
 
-describe('GET /api/health', () => {
-  it('pings the database', async () => {
-    const res = await t.http.get('/api/health').expect(200);
-    expect(res.body).toEqual({ status: 'ok', database: 'up' });
+describe('health (@nestjs/terminus)', () => {
+  it('is ready when the database answers and the data folder’s disk has room', async () => {
+    for (const path of ['/api/health', '/api/health/ready']) {
+      const res = await t.http.get(path).expect(200);
+      expect(res.body).toMatchObject({
+        status: 'ok',
+        info: { database: { status: 'up' }, disk: { status: 'up' } },
+        error: {},
+      });
+    }
+  });
+
+  it('is live on a heap check alone, and answers 503 naming the database when it is gone', async () => {
+    const own = await createTestApp();
+    try {
+      await own.http.get('/api/health/live').expect(200, {
+        status: 'ok',
+        info: { heap: { status: 'up' } },
+        error: {},
+        details: { heap: { status: 'up' } },
+      });
+      await own.dataSource.destroy();
+      const res = await own.http.get('/api/health/ready').expect(503);
+      expect(res.body).toMatchObject({ status: 'error', error: { database: { status: 'down' } } });
+      // Liveness does not depend on the database: the supervisor must not restart for it.
+      await own.http.get('/api/health/live').expect(200);
+    } finally {
+      await own.close().catch(() => undefined);
+    }
   });
 });
 

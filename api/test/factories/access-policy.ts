@@ -22,12 +22,16 @@ export const POLICY: Record<string, 'public' | Caller[]> = {
   'POST /api/auth/refresh': 'public',
   'POST /api/auth/logout': 'public',
   'POST /api/auth/accept-invitation': 'public',
+  'POST /api/auth/password-reset': 'public',
+  'POST /api/auth/password-reset/confirm': 'public',
   'GET /api/auth/me': ANY,
   // A client's own data (GDPR Art. 15, 17, 20).
   'GET /api/me/export': CLIENT,
   'DELETE /api/me': CLIENT,
   // The storefront's public pages.
   'GET /api/health': 'public',
+  'GET /api/health/ready': 'public',
+  'GET /api/health/live': 'public',
   'GET /api/studio': 'public',
   'GET /api/menus': 'public',
   'GET /api/menus/:id': 'public',
