@@ -33,3 +33,4 @@ export * from './prep-plan/prep-order.js';
 export * from './prep-plan/prep-plan.js';
 export * from './orders/order-api.js';
 export * from './insights/dashboard-api.js';
+export * from './allergy-notes/allergy-notes-api.js';

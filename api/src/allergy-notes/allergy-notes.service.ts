@@ -12,6 +12,7 @@ import {
   isKitchenError,
   OrderStatus,
   Role,
+  type GuestDataView,
   type PrepConflict,
   type Substitution,
 } from '@nappe/shared';
@@ -39,7 +40,7 @@ import type {
   UnresolvedConflict,
 } from './allergy-notes.types.js';
 import { renderBriefingPdf } from './briefing-pdf.js';
-import { GuestDataAccessEntity, type GuestDataView } from './entities/guest-data-access.entity.js';
+import { GuestDataAccessEntity } from './entities/guest-data-access.entity.js';
 import { OrderSubstitutionEntity } from './entities/order-substitution.entity.js';
 import {
   allergyNotesOf,

@@ -1,7 +1,8 @@
 import type { ReactNode } from 'react';
+import { useDesserts } from '../../../features/kitchen/api/get-desserts';
 import { useKitchenCatalogue } from '../../../features/kitchen/api/use-kitchen-catalogue';
-import { BlockSkeleton, LoadError } from '../../../features/kitchen/components/load-states';
-import type { KitchenCatalogueData } from '../../../features/kitchen/api/types';
+import { QueryGate } from '../../../features/kitchen/components/load-states';
+import type { DessertResponse, KitchenCatalogueData } from '../../../features/kitchen/api/types';
 
 /** Renders `children` with the whole catalogue (ingredients, recipes, desserts) once loaded. */
 export function CatalogueGate({
@@ -12,16 +13,31 @@ export function CatalogueGate({
   children: (catalogue: KitchenCatalogueData) => ReactNode;
 }) {
   const catalogue = useKitchenCatalogue(currency);
-  if (catalogue.error) {
-    return (
-      <LoadError
-        title="The kitchen’s ingredients and recipes could not be loaded"
-        error={catalogue.error}
-        onRetry={() => void catalogue.refetch()}
-        retrying={catalogue.isFetching}
-      />
-    );
-  }
-  if (!catalogue.data) return <BlockSkeleton label="Loading the kitchen…" />;
-  return children(catalogue.data);
+  return (
+    <QueryGate
+      query={catalogue}
+      loading="Loading the kitchen…"
+      failed="The kitchen’s ingredients and recipes could not be loaded"
+    >
+      {children}
+    </QueryGate>
+  );
+}
+
+/** Renders `children` with every dessert once loaded (a menu's choice). */
+export function DessertsGate({
+  children,
+}: {
+  children: (desserts: DessertResponse[]) => ReactNode;
+}) {
+  const desserts = useDesserts();
+  return (
+    <QueryGate
+      query={desserts}
+      loading="Loading desserts…"
+      failed="The desserts could not be loaded"
+    >
+      {children}
+    </QueryGate>
+  );
 }

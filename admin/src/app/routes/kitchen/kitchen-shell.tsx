@@ -60,10 +60,10 @@ export function WithKitchenViewer({
   );
 }
 
-/** Starts loading what a Kitchen screen needs while its code arrives; the screen shows its own errors. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- any query's options
-type AnyQueryOptions = EnsureQueryDataOptions<any, any, any, any>;
+export type AnyQueryOptions = EnsureQueryDataOptions<any, any, any, any>;
 
+/** Starts loading what a Kitchen screen needs while its code arrives; the screen shows its own errors. */
 export function warm(queryClient: QueryClient, ...options: AnyQueryOptions[]) {
   void queryClient.ensureQueryData(studioQueryOptions()).catch(() => undefined);
   // After a reload the session is restored first (the layout's loader asks the same query), so

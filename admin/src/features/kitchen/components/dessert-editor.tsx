@@ -1,5 +1,4 @@
 import {
-  Alert,
   Box,
   Button,
   Field,
@@ -9,13 +8,11 @@ import {
   NativeSelect,
   Stack,
   Text,
-  Textarea,
 } from '@chakra-ui/react';
-import { dessertSchema, type Dessert } from '@nappe/shared';
-import { useMemo, useState, type ReactNode } from 'react';
+import { dessertSchema } from '@nappe/shared';
+import { useMemo, type ReactNode } from 'react';
 import { useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { PlusIcon, TrashIcon } from '../../../components/ui/icons';
-import { ApiError } from '../../../lib/api-client';
 import { useCreateDessert } from '../api/create-dessert';
 import { useDeleteDessert } from '../api/delete-dessert';
 import type { DessertResponse } from '../api/types';
@@ -29,17 +26,12 @@ import {
   liveDessert,
   type DessertFormValues,
 } from '../lib/dessert-form-values';
-import { schemaResolver } from '../lib/form-resolver';
 import { attempt, dessertInsights, DRAFT_ID, indexWith } from '../lib/live-kitchen';
-import { placeServerMessages, saveFailureMessage } from '../lib/server-errors';
-import { DeleteButton } from './delete-dialog';
 import { DessertInsightsPanel } from './dessert-insights-panel';
-import { EditorActions, FormSection } from './editor-layout';
-import { TextField, type FormControl } from './form-controls';
+import { EditorArea, EditorColumns, EditorPanel, FormSection } from './editor-layout';
+import { NameField, TextAreaField, type FormControl } from './form-controls';
 import type { KitchenCatalogueData } from '../api/types';
-import { useUnsavedChangesGuard } from './unsaved-changes-guard';
-
-type FieldName = Parameters<ReturnType<typeof useForm<DessertFormValues>>['setError']>[0];
+import { ItemEditorForm, useItemEditor } from './item-editor';
 
 /** The chef's dessert editor: components per plate, plating notes, plate cost and allergens. */
 export function DessertEditor({
@@ -61,33 +53,26 @@ export function DessertEditor({
   photos?: ReactNode;
 }) {
   const id = dessert?.id ?? DRAFT_ID;
-  const create = useCreateDessert();
-  const update = useUpdateDessert();
-  const remove = useDeleteDessert();
-  const [formError, setFormError] = useState<string | null>(null);
-  const [savedNote, setSavedNote] = useState<string | null>(null);
-  const resolver = useMemo(
-    () =>
-      schemaResolver<DessertFormValues, typeof dessertSchema>(
-        (values) => dessertFromForm(values, id),
-        dessertSchema,
-        dessertFieldOf,
-        (_field, message) =>
-          /^(Invalid input|Too small|Too big)/.test(message) ? 'Check this value.' : message,
-      ),
-    [id],
-  );
-  const form = useForm<DessertFormValues, unknown, Dessert>({
-    resolver,
-    defaultValues: dessertToFormValues(dessert),
+  const editor = useItemEditor({
+    item: dessert,
+    schema: dessertSchema,
+    fromForm: (values: DessertFormValues) => dessertFromForm(values, id),
+    fieldOf: dessertFieldOf,
+    rephrase: (_field, message) =>
+      /^(Invalid input|Too small|Too big)/.test(message) ? 'Check this value.' : message,
+    toFormValues: dessertToFormValues,
+    toBody: dessertBody,
+    create: useCreateDessert(),
+    update: useUpdateDessert(),
+    remove: useDeleteDessert(),
+    onSaved,
+    onDeleted,
   });
   const {
     register,
     control,
-    handleSubmit,
-    formState: { errors, isDirty },
-  } = form;
-  const guard = useUnsavedChangesGuard(isDirty);
+    formState: { errors },
+  } = editor.form;
   const {
     fields,
     append,
@@ -102,76 +87,22 @@ export function DessertEditor({
     return index.ok ? dessertInsights(index.value, draft, { withCost: seesCosts }) : null;
   }, [catalogue, name, components, id, seesCosts]);
 
-  const onSubmit = handleSubmit(async (parsed) => {
-    setFormError(null);
-    setSavedNote(null);
-    const body = dessertBody(parsed);
-    try {
-      const saved = dessert
-        ? await update.mutateAsync({ id: dessert.id, body })
-        : await create.mutateAsync(body);
-      form.reset(dessertToFormValues(saved));
-      setSavedNote(`Saved “${saved.name}”.`);
-      guard.allowNextNavigation();
-      onSaved(saved, !dessert);
-    } catch (error) {
-      if (error instanceof ApiError && error.status === 400) {
-        const general: string[] = [];
-        for (const p of placeServerMessages(error, (path) => {
-          const field = dessertFieldOf(path);
-          return field.startsWith('root.') ? null : field;
-        })) {
-          if (p.field) form.setError(p.field as FieldName, { type: 'server', message: p.message });
-          else general.push(p.message);
-        }
-        setFormError(
-          general.length > 0 ? general.join(' ') : 'Please check the fields marked below.',
-        );
-      } else {
-        setFormError(saveFailureMessage(error));
-      }
-    }
-  });
-
   const recipes = catalogue.recipes;
   return (
-    <form onSubmit={(e) => void onSubmit(e)} noValidate>
-      {guard.dialog}
-      {formError && (
-        <Alert.Root status="error" role="alert" borderRadius="l2" mb="5">
-          <Alert.Indicator />
-          <Alert.Content>
-            <Alert.Title>Not saved</Alert.Title>
-            <Alert.Description>{formError}</Alert.Description>
-          </Alert.Content>
-        </Alert.Root>
-      )}
-      <Grid
-        templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 1fr) 24rem' }}
-        templateAreas={{
-          base: '"basics" "components" "panel" "plating" "photos"',
-          lg: '"basics panel" "components panel" "plating panel" "photos panel"',
-        }}
-        gap={{ base: '5', lg: '6' }}
-        alignItems="start"
-      >
-        <Box gridArea="basics" minW="0">
+    <ItemEditorForm editor={editor} what="dessert" actions={actions}>
+      <EditorColumns areas={['basics', 'components', 'plating', 'photos']} panelWidth="24rem">
+        <EditorArea area="basics">
           <FormSection title="Dessert" id="dessert-basics">
-            <TextField
-              label="Name"
-              required
-              error={errors.name?.message}
-              registration={register('name')}
-              autoComplete="off"
+            <NameField error={errors.name?.message} registration={register('name')} />
+            <TextAreaField
+              label="Description for clients"
+              rows={2}
+              error={errors.description?.message}
+              registration={register('description')}
             />
-            <Field.Root invalid={!!errors.description}>
-              <Field.Label>Description for clients</Field.Label>
-              <Textarea rows={2} {...register('description')} />
-              <Field.ErrorText>{errors.description?.message}</Field.ErrorText>
-            </Field.Root>
           </FormSection>
-        </Box>
-        <Box gridArea="components" minW="0">
+        </EditorArea>
+        <EditorArea area="components">
           <FormSection
             title="On each plate"
             id="dessert-components"
@@ -199,59 +130,32 @@ export function DessertEditor({
               </Button>
             </Stack>
           </FormSection>
-        </Box>
-        <Box
-          gridArea="panel"
-          position={{ lg: 'sticky' }}
-          top={{ lg: '4' }}
-          maxH={{ lg: 'calc(100dvh - 2rem)' }}
-          overflowY={{ lg: 'auto' }}
-        >
+        </EditorArea>
+        <EditorPanel>
           <DessertInsightsPanel
             insights={insights}
             waiting="Add a component with a portion to see the plate."
             currency={catalogue.currency}
             live
           />
-        </Box>
-        <Box gridArea="plating" minW="0">
+        </EditorPanel>
+        <EditorArea area="plating">
           <FormSection title="Plating" id="dessert-plating">
-            <Field.Root invalid={!!errors.platingNotes}>
-              <Field.Label>Plating notes for the team</Field.Label>
-              <Textarea rows={4} {...register('platingNotes')} />
-              <Field.ErrorText>{errors.platingNotes?.message}</Field.ErrorText>
-            </Field.Root>
+            <TextAreaField
+              label="Plating notes for the team"
+              rows={4}
+              error={errors.platingNotes?.message}
+              registration={register('platingNotes')}
+            />
           </FormSection>
-        </Box>
-        <Box gridArea="photos" minW="0">
+        </EditorArea>
+        <EditorArea area="photos">
           <FormSection title="Photos" id="dessert-photos">
             {photos ?? <Text color="fg.muted">Create the dessert first, then add its photos.</Text>}
           </FormSection>
-        </Box>
-      </Grid>
-      <EditorActions
-        saving={create.isPending || update.isPending}
-        saveLabel={dessert ? 'Save changes' : 'Create dessert'}
-        dirty={isDirty}
-        status={savedNote && !isDirty ? savedNote : undefined}
-        extra={
-          <>
-            {actions}
-            {dessert && (
-              <DeleteButton
-                what="dessert"
-                name={dessert.name}
-                onDelete={() => remove.mutateAsync(dessert.id)}
-                onDeleted={() => {
-                  guard.allowNextNavigation();
-                  onDeleted();
-                }}
-              />
-            )}
-          </>
-        }
-      />
-    </form>
+        </EditorArea>
+      </EditorColumns>
+    </ItemEditorForm>
   );
 }
 

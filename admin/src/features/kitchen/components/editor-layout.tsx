@@ -2,6 +2,7 @@ import {
   Box,
   Button,
   Flex,
+  Grid,
   Heading,
   HStack,
   Stack,
@@ -9,6 +10,73 @@ import {
   useBreakpointValue,
 } from '@chakra-ui/react';
 import type { ReactNode } from 'react';
+
+/**
+ * The grid areas of an editor whose live figures (`panel`) stand beside its sections on a wide
+ * screen and, on a phone, come after the first `panelAfter` sections.
+ */
+export function editorAreas(areas: readonly string[], panelAfter = 2) {
+  const phone = [...areas.slice(0, panelAfter), 'panel', ...areas.slice(panelAfter)];
+  return {
+    base: phone.map((area) => `"${area}"`).join(' '),
+    lg: areas.map((area) => `"${area} panel"`).join(' '),
+  };
+}
+
+/** An editor's sections (`EditorArea`) in a column, with its `EditorPanel` beside them. */
+export function EditorColumns({
+  areas,
+  panelWidth,
+  children,
+}: {
+  /** The sections, top to bottom. */
+  areas: readonly string[];
+  panelWidth: string;
+  children: ReactNode;
+}) {
+  return (
+    <Grid
+      templateColumns={{ base: 'minmax(0, 1fr)', lg: `minmax(0, 1fr) ${panelWidth}` }}
+      templateAreas={editorAreas(areas)}
+      gap={{ base: '5', lg: '6' }}
+      alignItems="start"
+    >
+      {children}
+    </Grid>
+  );
+}
+
+/** One section's place in `EditorColumns`. */
+export function EditorArea({ area, children }: { area: string; children: ReactNode }) {
+  return (
+    <Box gridArea={area} minW="0">
+      {children}
+    </Box>
+  );
+}
+
+/**
+ * The live figures beside the sections, kept in view while the form scrolls; unless `scrolls` is
+ * false they scroll on their own when taller than the screen.
+ */
+export function EditorPanel({
+  scrolls = true,
+  children,
+}: {
+  scrolls?: boolean;
+  children: ReactNode;
+}) {
+  return (
+    <Box
+      gridArea="panel"
+      position={{ lg: 'sticky' }}
+      top={{ lg: '4' }}
+      {...(scrolls ? { maxH: { lg: 'calc(100dvh - 2rem)' }, overflowY: { lg: 'auto' } } : {})}
+    >
+      {children}
+    </Box>
+  );
+}
 
 /** One part of an editor, with its heading. */
 export function FormSection({

@@ -1,4 +1,4 @@
-import { Checkbox, Field, Input, NativeSelect, type InputProps } from '@chakra-ui/react';
+import { Checkbox, Field, Input, NativeSelect, Textarea, type InputProps } from '@chakra-ui/react';
 import type { ReactNode, Ref } from 'react';
 import {
   useController,
@@ -66,6 +66,40 @@ export function TextField({
       </Field.Label>
       <Input {...input} {...registration} ref={inputRef ?? registration.ref} />
       {helper && !error && <Field.HelperText>{helper}</Field.HelperText>}
+      <Field.ErrorText>{error}</Field.ErrorText>
+    </Field.Root>
+  );
+}
+
+/** The name of a catalogue item: required, and not the browser's to fill in. */
+export function NameField({
+  error,
+  registration,
+}: {
+  error?: string;
+  registration: UseFormRegisterReturn;
+}) {
+  return (
+    <TextField label="Name" required error={error} registration={registration} autoComplete="off" />
+  );
+}
+
+/** A labelled block of free text (a description, notes) with its error. */
+export function TextAreaField({
+  label,
+  rows,
+  error,
+  registration,
+}: {
+  label: ReactNode;
+  rows: number;
+  error?: string;
+  registration: UseFormRegisterReturn;
+}) {
+  return (
+    <Field.Root invalid={!!error}>
+      <Field.Label>{label}</Field.Label>
+      <Textarea rows={rows} {...registration} />
       <Field.ErrorText>{error}</Field.ErrorText>
     </Field.Root>
   );

@@ -1,5 +1,4 @@
 import {
-  Alert,
   Box,
   Field,
   Grid,
@@ -10,7 +9,6 @@ import {
   SimpleGrid,
   Stack,
   Text,
-  Textarea,
 } from '@chakra-ui/react';
 import {
   ALLERGENIC_FOODS,
@@ -25,15 +23,14 @@ import {
   type AllergenicFood,
   type Ingredient,
 } from '@nappe/shared';
-import { useMemo, useState } from 'react';
+import { useMemo, type ReactNode } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { ApiError } from '../../../lib/api-client';
 import { parseMoneyToMinor } from '../../../lib/money-input';
 import { useCreateIngredient } from '../api/create-ingredient';
 import { useDeleteIngredient } from '../api/delete-ingredient';
 import type { IngredientResponse } from '../api/types';
 import { useUpdateIngredient } from '../api/update-ingredient';
-import { parseNumber, schemaResolver } from '../lib/form-resolver';
+import { parseNumber } from '../lib/form-resolver';
 import {
   allergensFromForm,
   ingredientBody,
@@ -51,21 +48,19 @@ import {
   UNIT_OPTIONS,
 } from '../lib/labels';
 import { attempt } from '../lib/live-kitchen';
-import { placeServerMessages, saveFailureMessage } from '../lib/server-errors';
 import { AllergenReportView, LabelText } from './allergen-display';
-import { DeleteButton } from './delete-dialog';
-import { EditorActions, FormSection } from './editor-layout';
+import { FormSection } from './editor-layout';
 import {
   decimalInput,
   FormCheckbox,
+  NameField,
   SelectField,
+  TextAreaField,
   TextField,
   type FormControl,
 } from './form-controls';
 import { IngredientAllergenPicker } from './ingredient-allergen-picker';
-import { useUnsavedChangesGuard } from './unsaved-changes-guard';
-
-type FieldName = Parameters<ReturnType<typeof useForm<IngredientFormValues>>['setError']>[0];
+import { ItemEditorForm, useItemEditor } from './item-editor';
 
 /** The chef's ingredient form: create or change one, or delete it. */
 export function IngredientEditor({
@@ -73,76 +68,33 @@ export function IngredientEditor({
   currency,
   onSaved,
   onDeleted,
-  backLink,
+  actions,
 }: {
   ingredient?: IngredientResponse;
   currency: string;
   onSaved: (saved: IngredientResponse, created: boolean) => void;
   onDeleted: () => void;
-  backLink: React.ReactNode;
+  actions: ReactNode;
 }) {
-  const create = useCreateIngredient();
-  const update = useUpdateIngredient();
-  const remove = useDeleteIngredient();
-  const [formError, setFormError] = useState<string | null>(null);
-  const [savedAt, setSavedAt] = useState<string | null>(null);
-
-  const resolver = useMemo(
-    () =>
-      schemaResolver<IngredientFormValues, typeof ingredientSchema>(
-        (values) => ingredientFromForm(values, currency),
-        ingredientSchema,
-        ingredientFieldOf,
-      ),
-    [currency],
-  );
-  const form = useForm<IngredientFormValues, unknown, Ingredient>({
-    resolver,
-    defaultValues: ingredientToFormValues(ingredient, currency),
+  const editor = useItemEditor({
+    item: ingredient,
+    schema: ingredientSchema,
+    fromForm: (values: IngredientFormValues) => ingredientFromForm(values, currency),
+    fieldOf: ingredientFieldOf,
+    toFormValues: (saved: IngredientResponse | undefined) =>
+      ingredientToFormValues(saved, currency),
+    toBody: ingredientBody,
+    create: useCreateIngredient(),
+    update: useUpdateIngredient(),
+    remove: useDeleteIngredient(),
+    onSaved,
+    onDeleted,
   });
   const {
     register,
     control,
-    handleSubmit,
-    formState: { errors, isDirty },
-  } = form;
-  const guard = useUnsavedChangesGuard(isDirty);
-  const saving = create.isPending || update.isPending;
-
-  const onSubmit = handleSubmit(async (parsed) => {
-    setFormError(null);
-    setSavedAt(null);
-    const body = ingredientBody(parsed);
-    try {
-      const saved = ingredient
-        ? await update.mutateAsync({ id: ingredient.id, body })
-        : await create.mutateAsync(body);
-      form.reset(ingredientToFormValues(saved, currency));
-      setSavedAt(`Saved “${saved.name}”.`);
-      guard.allowNextNavigation();
-      onSaved(saved, !ingredient);
-    } catch (error) {
-      if (error instanceof ApiError && error.status === 400) {
-        const placed = placeServerMessages(error, (path) => {
-          const field = ingredientFieldOf(
-            path,
-            ingredientFromForm(form.getValues(), currency).candidate,
-          );
-          return field.startsWith('root.') ? null : field;
-        });
-        const general: string[] = [];
-        for (const p of placed) {
-          if (p.field) form.setError(p.field as FieldName, { type: 'server', message: p.message });
-          else general.push(p.message);
-        }
-        setFormError(
-          general.length > 0 ? general.join(' ') : 'Please check the fields marked below.',
-        );
-      } else {
-        setFormError(saveFailureMessage(error));
-      }
-    }
-  });
+    formState: { errors },
+  } = editor.form;
 
   const rootErrors = Object.values(errors.root ?? {})
     .map((e) => (typeof e === 'object' && e && 'message' in e ? String(e.message ?? '') : ''))
@@ -154,29 +106,10 @@ export function IngredientEditor({
   }
 
   return (
-    <form onSubmit={(e) => void onSubmit(e)} noValidate>
-      {guard.dialog}
+    <ItemEditorForm editor={editor} what="ingredient" problems={rootErrors} actions={actions}>
       <Stack gap="5">
-        {(formError || rootErrors.length > 0) && (
-          <Alert.Root status="error" role="alert" borderRadius="l2">
-            <Alert.Indicator />
-            <Alert.Content>
-              <Alert.Title>Not saved</Alert.Title>
-              <Alert.Description>
-                {[formError, ...rootErrors].filter(Boolean).join(' ')}
-              </Alert.Description>
-            </Alert.Content>
-          </Alert.Root>
-        )}
-
         <FormSection title="What it is" id="ing-basics">
-          <TextField
-            label="Name"
-            required
-            error={errors.name?.message}
-            registration={register('name')}
-            autoComplete="off"
-          />
+          <NameField error={errors.name?.message} registration={register('name')} />
           <TextField
             label="Name on labels"
             helper="As an ingredient list writes it, e.g. “emulsifier: soya lecithin”. Leave blank to use the name."
@@ -292,37 +225,15 @@ export function IngredientEditor({
         <CompositionSection control={control} register={register} errors={errors} />
 
         <FormSection title="Notes" id="ing-notes">
-          <Field.Root invalid={!!errors.notes}>
-            <Field.Label>Notes for the kitchen</Field.Label>
-            <Textarea rows={3} {...register('notes')} />
-            <Field.ErrorText>{errors.notes?.message}</Field.ErrorText>
-          </Field.Root>
+          <TextAreaField
+            label="Notes for the kitchen"
+            rows={3}
+            error={errors.notes?.message}
+            registration={register('notes')}
+          />
         </FormSection>
       </Stack>
-
-      <EditorActions
-        saving={saving}
-        saveLabel={ingredient ? 'Save changes' : 'Create ingredient'}
-        dirty={isDirty}
-        status={savedAt && !isDirty ? savedAt : undefined}
-        extra={
-          <>
-            {backLink}
-            {ingredient && (
-              <DeleteButton
-                what="ingredient"
-                name={ingredient.name}
-                onDelete={() => remove.mutateAsync(ingredient.id)}
-                onDeleted={() => {
-                  guard.allowNextNavigation();
-                  onDeleted();
-                }}
-              />
-            )}
-          </>
-        }
-      />
-    </form>
+    </ItemEditorForm>
   );
 }
 

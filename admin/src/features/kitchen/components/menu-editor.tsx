@@ -1,9 +1,6 @@
 import {
-  Alert,
-  Box,
   Button,
   Field,
-  Grid,
   HStack,
   IconButton,
   Input,
@@ -13,18 +10,15 @@ import {
   Stack,
   Switch,
   Text,
-  Textarea,
 } from '@chakra-ui/react';
-import { menuSchema, type Menu } from '@nappe/shared';
-import { useMemo, useState, type ReactNode } from 'react';
-import { Controller, useFieldArray, useForm } from 'react-hook-form';
+import { menuSchema } from '@nappe/shared';
+import type { ReactNode } from 'react';
+import { Controller, useFieldArray } from 'react-hook-form';
 import { ArrowDownIcon, ArrowUpIcon, PlusIcon, TrashIcon } from '../../../components/ui/icons';
-import { ApiError } from '../../../lib/api-client';
 import { useCreateMenu } from '../api/create-menu';
 import { useDeleteMenu } from '../api/delete-menu';
 import type { DessertResponse, MenuResponse } from '../api/types';
 import { useUpdateMenu } from '../api/update-menu';
-import { schemaResolver } from '../lib/form-resolver';
 import {
   menuBody,
   menuFieldOf,
@@ -33,14 +27,10 @@ import {
   rephraseMenuMessage,
   type MenuFormValues,
 } from '../lib/menu-form-values';
-import { placeServerMessages, saveFailureMessage } from '../lib/server-errors';
-import { DeleteButton } from './delete-dialog';
-import { EditorActions, FormSection } from './editor-layout';
-import { TextField } from './form-controls';
+import { EditorArea, EditorColumns, EditorPanel, FormSection } from './editor-layout';
+import { NameField, TextAreaField, TextField } from './form-controls';
+import { ItemEditorForm, useItemEditor } from './item-editor';
 import { MenuCostingPanel } from './menu-costing-panel';
-import { useUnsavedChangesGuard } from './unsaved-changes-guard';
-
-type FieldName = Parameters<ReturnType<typeof useForm<MenuFormValues>>['setError']>[0];
 
 /** The chef's menu editor: desserts, price per guest, guest limits, lead time, on sale or not. */
 export function MenuEditor({
@@ -60,32 +50,25 @@ export function MenuEditor({
   actions: ReactNode;
   photos?: ReactNode;
 }) {
-  const create = useCreateMenu();
-  const update = useUpdateMenu();
-  const remove = useDeleteMenu();
-  const [formError, setFormError] = useState<string | null>(null);
-  const [savedNote, setSavedNote] = useState<string | null>(null);
-  const resolver = useMemo(
-    () =>
-      schemaResolver<MenuFormValues, typeof menuSchema>(
-        (values) => menuFromForm(values, currency),
-        menuSchema,
-        menuFieldOf,
-        rephraseMenuMessage,
-      ),
-    [currency],
-  );
-  const form = useForm<MenuFormValues, unknown, Menu>({
-    resolver,
-    defaultValues: menuToFormValues(menu, currency),
+  const editor = useItemEditor({
+    item: menu,
+    schema: menuSchema,
+    fromForm: (values: MenuFormValues) => menuFromForm(values, currency),
+    fieldOf: menuFieldOf,
+    rephrase: rephraseMenuMessage,
+    toFormValues: (saved: MenuResponse | undefined) => menuToFormValues(saved, currency),
+    toBody: menuBody,
+    create: useCreateMenu(),
+    update: useUpdateMenu(),
+    remove: useDeleteMenu(),
+    onSaved,
+    onDeleted,
   });
   const {
     register,
     control,
-    handleSubmit,
     formState: { errors, isDirty },
-  } = form;
-  const guard = useUnsavedChangesGuard(isDirty);
+  } = editor.form;
   const {
     fields,
     append,
@@ -93,72 +76,18 @@ export function MenuEditor({
     move,
   } = useFieldArray({ control, name: 'desserts' });
 
-  const onSubmit = handleSubmit(async (parsed) => {
-    setFormError(null);
-    setSavedNote(null);
-    const body = menuBody(parsed);
-    try {
-      const saved = menu
-        ? await update.mutateAsync({ id: menu.id, body })
-        : await create.mutateAsync(body);
-      form.reset(menuToFormValues(saved, currency));
-      setSavedNote(`Saved “${saved.name}”.`);
-      guard.allowNextNavigation();
-      onSaved(saved, !menu);
-    } catch (error) {
-      if (error instanceof ApiError && error.status === 400) {
-        const general: string[] = [];
-        for (const p of placeServerMessages(error, (path) => {
-          const field = menuFieldOf(path);
-          return field.startsWith('root.') ? null : field;
-        })) {
-          if (p.field) form.setError(p.field as FieldName, { type: 'server', message: p.message });
-          else general.push(p.message);
-        }
-        setFormError(
-          general.length > 0 ? general.join(' ') : 'Please check the fields marked below.',
-        );
-      } else {
-        setFormError(saveFailureMessage(error));
-      }
-    }
-  });
-
   return (
-    <form onSubmit={(e) => void onSubmit(e)} noValidate>
-      {guard.dialog}
-      {formError && (
-        <Alert.Root status="error" role="alert" borderRadius="l2" mb="5">
-          <Alert.Indicator />
-          <Alert.Content>
-            <Alert.Title>Not saved</Alert.Title>
-            <Alert.Description>{formError}</Alert.Description>
-          </Alert.Content>
-        </Alert.Root>
-      )}
-      <Grid
-        templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 1fr) 22rem' }}
-        templateAreas={{
-          base: '"basics" "desserts" "panel" "booking" "photos"',
-          lg: '"basics panel" "desserts panel" "booking panel" "photos panel"',
-        }}
-        gap={{ base: '5', lg: '6' }}
-        alignItems="start"
-      >
-        <Box gridArea="basics" minW="0">
+    <ItemEditorForm editor={editor} what="menu" actions={actions}>
+      <EditorColumns areas={['basics', 'desserts', 'booking', 'photos']} panelWidth="22rem">
+        <EditorArea area="basics">
           <FormSection title="Menu" id="menu-basics">
-            <TextField
-              label="Name"
-              required
-              error={errors.name?.message}
-              registration={register('name')}
-              autoComplete="off"
+            <NameField error={errors.name?.message} registration={register('name')} />
+            <TextAreaField
+              label="Description for clients"
+              rows={3}
+              error={errors.description?.message}
+              registration={register('description')}
             />
-            <Field.Root invalid={!!errors.description}>
-              <Field.Label>Description for clients</Field.Label>
-              <Textarea rows={3} {...register('description')} />
-              <Field.ErrorText>{errors.description?.message}</Field.ErrorText>
-            </Field.Root>
             <Controller
               control={control}
               name="active"
@@ -175,8 +104,8 @@ export function MenuEditor({
               )}
             />
           </FormSection>
-        </Box>
-        <Box gridArea="desserts" minW="0">
+        </EditorArea>
+        <EditorArea area="desserts">
           <FormSection
             title="Desserts"
             id="menu-desserts"
@@ -247,11 +176,11 @@ export function MenuEditor({
               </Button>
             </Stack>
           </FormSection>
-        </Box>
-        <Box gridArea="panel" position={{ lg: 'sticky' }} top={{ lg: '4' }}>
+        </EditorArea>
+        <EditorPanel scrolls={false}>
           <MenuCostingPanel menuId={menu?.id ?? null} currency={currency} unsaved={isDirty} />
-        </Box>
-        <Box gridArea="booking" minW="0">
+        </EditorPanel>
+        <EditorArea area="booking">
           <FormSection
             title="Booking"
             id="menu-booking"
@@ -294,35 +223,13 @@ export function MenuEditor({
               />
             </SimpleGrid>
           </FormSection>
-        </Box>
-        <Box gridArea="photos" minW="0">
+        </EditorArea>
+        <EditorArea area="photos">
           <FormSection title="Photo" id="menu-photos">
             {photos ?? <Text color="fg.muted">Create the menu first, then add a photo.</Text>}
           </FormSection>
-        </Box>
-      </Grid>
-      <EditorActions
-        saving={create.isPending || update.isPending}
-        saveLabel={menu ? 'Save changes' : 'Create menu'}
-        dirty={isDirty}
-        status={savedNote && !isDirty ? savedNote : undefined}
-        extra={
-          <>
-            {actions}
-            {menu && (
-              <DeleteButton
-                what="menu"
-                name={menu.name}
-                onDelete={() => remove.mutateAsync(menu.id)}
-                onDeleted={() => {
-                  guard.allowNextNavigation();
-                  onDeleted();
-                }}
-              />
-            )}
-          </>
-        }
-      />
-    </form>
+        </EditorArea>
+      </EditorColumns>
+    </ItemEditorForm>
   );
 }

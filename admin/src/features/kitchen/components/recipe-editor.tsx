@@ -1,23 +1,12 @@
-import {
-  Alert,
-  Box,
-  Field,
-  Grid,
-  Input,
-  InputGroup,
-  SimpleGrid,
-  Text,
-  Textarea,
-} from '@chakra-ui/react';
-import { recipeSchema, storageCaution, type Recipe } from '@nappe/shared';
+import { Field, Input, InputGroup, SimpleGrid, Text } from '@chakra-ui/react';
+import { recipeSchema, storageCaution } from '@nappe/shared';
 import { useMemo, useState, type ReactNode } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
-import { ApiError } from '../../../lib/api-client';
+import { useWatch } from 'react-hook-form';
 import { useCreateRecipe } from '../api/create-recipe';
 import { useDeleteRecipe } from '../api/delete-recipe';
 import type { KitchenCatalogueData, RecipeResponse } from '../api/types';
 import { useUpdateRecipe } from '../api/update-recipe';
-import { parseNumber, schemaResolver } from '../lib/form-resolver';
+import { parseNumber } from '../lib/form-resolver';
 import { formatHours, STORAGE_OPTIONS, unitLabel } from '../lib/labels';
 import {
   attempt,
@@ -36,18 +25,14 @@ import {
   rephraseRecipeMessage,
   type RecipeFormValues,
 } from '../lib/recipe-form-values';
-import { placeServerMessages, saveFailureMessage } from '../lib/server-errors';
-import { DeleteButton } from './delete-dialog';
-import { EditorActions, FormSection } from './editor-layout';
-import { decimalInput, SelectField, TextField } from './form-controls';
+import { EditorArea, EditorColumns, EditorPanel, FormSection } from './editor-layout';
+import { decimalInput, NameField, SelectField, TextAreaField, TextField } from './form-controls';
+import { ItemEditorForm, useItemEditor } from './item-editor';
 import type { PickerOption } from './item-picker';
 import { RecipeInsightsPanel } from './recipe-insights-panel';
 import { RecipeLinesEditor } from './recipe-lines-editor';
 import { RecipeStepsEditor } from './recipe-steps-editor';
 import { StorageCaution } from './safety-notes';
-import { useUnsavedChangesGuard } from './unsaved-changes-guard';
-
-type FieldName = Parameters<ReturnType<typeof useForm<RecipeFormValues>>['setError']>[0];
 
 /** Ingredients and the other recipes, for the line picker. */
 export function pickerOptions(catalogue: KitchenCatalogueData, selfId: string): PickerOption[] {
@@ -69,6 +54,30 @@ export function pickerOptions(catalogue: KitchenCatalogueData, selfId: string): 
   ];
 }
 
+/**
+ * The line a server message without a field path is about: the sub-recipe line that enters a
+ * loop, or the line whose ingredient or recipe the message names by id.
+ */
+function lineOfMessage(
+  message: string,
+  values: RecipeFormValues,
+  catalogue: KitchenCatalogueData,
+  id: string,
+): number | null {
+  if (message.startsWith('These recipes use each other in a loop')) {
+    const candidate = recipeFromForm(values, id).candidate;
+    const index = attempt(() => indexWith(catalogue, { recipe: candidate }));
+    const through = index.ok ? cycleThrough(index.value, id) : null;
+    const at = through ? values.lines.findIndex((l) => l.ref === `recipe:${through.enters}`) : -1;
+    return at >= 0 ? at : null;
+  }
+  const at = values.lines.findIndex((l) => {
+    const refId = l.ref.slice(l.ref.indexOf(':') + 1);
+    return refId !== '' && message.includes(`(id ${refId})`);
+  });
+  return at >= 0 ? at : null;
+}
+
 /** The chef's recipe editor, with cost, allergens and mix balance worked out as the lines change. */
 export function RecipeEditor({
   recipe,
@@ -86,34 +95,31 @@ export function RecipeEditor({
   actions: ReactNode;
 }) {
   const id = recipe?.id ?? DRAFT_ID;
-  const create = useCreateRecipe();
-  const update = useUpdateRecipe();
-  const remove = useDeleteRecipe();
-  const [formError, setFormError] = useState<string | null>(null);
-  const [savedNote, setSavedNote] = useState<string | null>(null);
   const [overrun, setOverrun] = useState('');
 
-  const resolver = useMemo(
-    () =>
-      schemaResolver<RecipeFormValues, typeof recipeSchema>(
-        (values) => recipeFromForm(values, id),
-        recipeSchema,
-        recipeFieldOf,
-        rephraseRecipeMessage,
-      ),
-    [id],
-  );
-  const form = useForm<RecipeFormValues, unknown, Recipe>({
-    resolver,
-    defaultValues: recipeToFormValues(recipe),
+  const editor = useItemEditor({
+    item: recipe,
+    schema: recipeSchema,
+    fromForm: (values: RecipeFormValues) => recipeFromForm(values, id),
+    fieldOf: recipeFieldOf,
+    rephrase: rephraseRecipeMessage,
+    toFormValues: recipeToFormValues,
+    toBody: recipeBody,
+    placeElsewhere: (message, values) => {
+      const line = lineOfMessage(message, values, catalogue, id);
+      return line === null ? null : `lines.${line}.ref`;
+    },
+    create: useCreateRecipe(),
+    update: useUpdateRecipe(),
+    remove: useDeleteRecipe(),
+    onSaved,
+    onDeleted,
   });
   const {
     register,
     control,
-    handleSubmit,
-    formState: { errors, isDirty },
-  } = form;
-  const guard = useUnsavedChangesGuard(isDirty);
+    formState: { errors },
+  } = editor.form;
 
   // ---------------------------------------------------------------- live figures
   const [name, yieldG, storage, lines, density, unitWeight, shelfLife] = useWatch({
@@ -167,93 +173,14 @@ export function RecipeEditor({
   );
   const options = useMemo(() => pickerOptions(catalogue, id), [catalogue, id]);
 
-  // ---------------------------------------------------------------- saving
-  const placeAtLine = (message: string): number | null => {
-    const values = form.getValues();
-    if (message.startsWith('These recipes use each other in a loop')) {
-      const candidate = recipeFromForm(values, id).candidate;
-      const index = attempt(() => indexWith(catalogue, { recipe: candidate }));
-      const through = index.ok ? cycleThrough(index.value, id) : null;
-      const at = through ? values.lines.findIndex((l) => l.ref === `recipe:${through.enters}`) : -1;
-      return at >= 0 ? at : null;
-    }
-    const at = values.lines.findIndex((l) => {
-      const refId = l.ref.slice(l.ref.indexOf(':') + 1);
-      return refId !== '' && message.includes(`(id ${refId})`);
-    });
-    return at >= 0 ? at : null;
-  };
-
-  const onSubmit = handleSubmit(async (parsed) => {
-    setFormError(null);
-    setSavedNote(null);
-    const body = recipeBody(parsed);
-    try {
-      const saved = recipe
-        ? await update.mutateAsync({ id: recipe.id, body })
-        : await create.mutateAsync(body);
-      form.reset(recipeToFormValues(saved));
-      setSavedNote(`Saved “${saved.name}”.`);
-      guard.allowNextNavigation();
-      onSaved(saved, !recipe);
-    } catch (error) {
-      if (error instanceof ApiError && error.status === 400) {
-        const general: string[] = [];
-        for (const placed of placeServerMessages(error, (path) => {
-          const field = recipeFieldOf(path);
-          return field.startsWith('root.') ? null : field;
-        })) {
-          const line = placed.field ? null : placeAtLine(placed.message);
-          if (placed.field) {
-            form.setError(placed.field as FieldName, { type: 'server', message: placed.message });
-          } else if (line !== null) {
-            form.setError(`lines.${line}.ref`, { type: 'server', message: placed.message });
-          } else {
-            general.push(placed.message);
-          }
-        }
-        setFormError(
-          general.length > 0 ? general.join(' ') : 'Please check the fields marked below.',
-        );
-      } else {
-        setFormError(saveFailureMessage(error));
-      }
-    }
-  });
-
   const shelfHours = parseNumber(shelfLife);
-  const saving = create.isPending || update.isPending;
 
   return (
-    <form onSubmit={(e) => void onSubmit(e)} noValidate>
-      {guard.dialog}
-      {formError && (
-        <Alert.Root status="error" role="alert" borderRadius="l2" mb="5">
-          <Alert.Indicator />
-          <Alert.Content>
-            <Alert.Title>Not saved</Alert.Title>
-            <Alert.Description>{formError}</Alert.Description>
-          </Alert.Content>
-        </Alert.Root>
-      )}
-      <Grid
-        templateColumns={{ base: 'minmax(0, 1fr)', lg: 'minmax(0, 1fr) 24rem' }}
-        templateAreas={{
-          base: '"basics" "lines" "panel" "method" "equipment" "notes"',
-          lg: '"basics panel" "lines panel" "method panel" "equipment panel" "notes panel"',
-        }}
-        gap={{ base: '5', lg: '6' }}
-        alignItems="start"
-      >
-        <Box gridArea="basics" minW="0">
+    <ItemEditorForm editor={editor} what="recipe" actions={actions}>
+      <EditorColumns areas={['basics', 'lines', 'method', 'equipment', 'notes']} panelWidth="24rem">
+        <EditorArea area="basics">
           <FormSection title="Recipe" id="recipe-basics">
-            <TextField
-              label="Name"
-              required
-              error={errors.name?.message}
-              registration={register('name')}
-              autoComplete="off"
-            />
+            <NameField error={errors.name?.message} registration={register('name')} />
             <SimpleGrid columns={{ base: 1, sm: 3 }} gap="4">
               <Field.Root invalid={!!errors.yieldG} required>
                 <Field.Label>
@@ -290,8 +217,8 @@ export function RecipeEditor({
             </SimpleGrid>
             <StorageCaution text={storageCaution(storage)} />
           </FormSection>
-        </Box>
-        <Box gridArea="lines" minW="0">
+        </EditorArea>
+        <EditorArea area="lines">
           <FormSection
             title="Lines"
             id="recipe-lines"
@@ -307,14 +234,8 @@ export function RecipeEditor({
               loopEnters={loop?.enters ?? null}
             />
           </FormSection>
-        </Box>
-        <Box
-          gridArea="panel"
-          position={{ lg: 'sticky' }}
-          top={{ lg: '4' }}
-          maxH={{ lg: 'calc(100dvh - 2rem)' }}
-          overflowY={{ lg: 'auto' }}
-        >
+        </EditorArea>
+        <EditorPanel>
           <RecipeInsightsPanel
             insights={insights}
             waiting={live.recipe ? undefined : live.reason}
@@ -329,8 +250,8 @@ export function RecipeEditor({
               These recipes would use each other in a loop: {loop.names.join(' → ')}.
             </Text>
           )}
-        </Box>
-        <Box gridArea="method" minW="0">
+        </EditorPanel>
+        <EditorArea area="method">
           <FormSection
             title="Method"
             id="recipe-method"
@@ -338,8 +259,8 @@ export function RecipeEditor({
           >
             <RecipeStepsEditor control={control} register={register} errors={errors.steps} />
           </FormSection>
-        </Box>
-        <Box gridArea="equipment" minW="0">
+        </EditorArea>
+        <EditorArea area="equipment">
           <FormSection
             title="Equipment and use elsewhere"
             id="recipe-equipment"
@@ -373,40 +294,18 @@ export function RecipeEditor({
               />
             </SimpleGrid>
           </FormSection>
-        </Box>
-        <Box gridArea="notes" minW="0">
+        </EditorArea>
+        <EditorArea area="notes">
           <FormSection title="Notes" id="recipe-notes">
-            <Field.Root invalid={!!errors.notes}>
-              <Field.Label>Notes for the kitchen</Field.Label>
-              <Textarea rows={3} {...register('notes')} />
-              <Field.ErrorText>{errors.notes?.message}</Field.ErrorText>
-            </Field.Root>
+            <TextAreaField
+              label="Notes for the kitchen"
+              rows={3}
+              error={errors.notes?.message}
+              registration={register('notes')}
+            />
           </FormSection>
-        </Box>
-      </Grid>
-
-      <EditorActions
-        saving={saving}
-        saveLabel={recipe ? 'Save changes' : 'Create recipe'}
-        dirty={isDirty}
-        status={savedNote && !isDirty ? savedNote : undefined}
-        extra={
-          <>
-            {actions}
-            {recipe && (
-              <DeleteButton
-                what="recipe"
-                name={recipe.name}
-                onDelete={() => remove.mutateAsync(recipe.id)}
-                onDeleted={() => {
-                  guard.allowNextNavigation();
-                  onDeleted();
-                }}
-              />
-            )}
-          </>
-        }
-      />
-    </form>
+        </EditorArea>
+      </EditorColumns>
+    </ItemEditorForm>
   );
 }
