@@ -34,3 +34,4 @@ export * from './prep-plan/prep-plan.js';
 export * from './orders/order-api.js';
 export * from './insights/dashboard-api.js';
 export * from './allergy-notes/allergy-notes-api.js';
+export * from './words.js';

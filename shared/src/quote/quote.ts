@@ -31,6 +31,7 @@ import {
   taxAdded,
   taxIncluded,
 } from './money.js';
+import { plural } from '../words.js';
 
 /**
  * The quote (DESIGN.md §6): per-guest price × guests, tax included or added, deposit, balance
@@ -107,10 +108,6 @@ function checkPricing(pricing: PricingSnapshot): PricingSnapshot {
     );
   }
   return { ...parsed.data, cancellationTiers: sortTiers(parsed.data.cancellationTiers) };
-}
-
-function plural(n: number, one: string, many = `${one}s`): string {
-  return `${n} ${n === 1 ? one : many}`;
 }
 
 // ---------------------------------------------------------------- totals

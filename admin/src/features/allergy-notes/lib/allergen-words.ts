@@ -159,6 +159,4 @@ export function unresolvedPlates(guests: readonly GuestNote[]): number {
   return guests.reduce((n, g) => n + g.plates.filter((p) => !p.resolved).length, 0);
 }
 
-export function plural(n: number, one: string, many = `${one}s`): string {
-  return `${n} ${n === 1 ? one : many}`;
-}
+export { plural } from '@nappe/shared';

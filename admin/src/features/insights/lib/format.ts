@@ -96,8 +96,7 @@ export function formatPercent(percent: number): string {
 
 export const formatCount = (n: number) => new Intl.NumberFormat('en-GB').format(n);
 
-export const plural = (n: number, one: string, many = `${one}s`) =>
-  `${formatCount(n)} ${n === 1 ? one : many}`;
+export { plural } from '@nappe/shared';
 
 const STATUS_LABELS: Record<OrderStatus, string> = {
   [OrderStatus.PendingPayment]: 'Awaiting payment',

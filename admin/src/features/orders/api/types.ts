@@ -1,4 +1,4 @@
-import type { OrderDetail } from '@nappe/shared';
+import type { AllergyNotes, OrderDetail, UnresolvedConflict } from '@nappe/shared';
 
 /** Response shapes the Orders screens read that are not in @nappe/shared. */
 
@@ -10,24 +10,15 @@ export interface Page<T> {
   pageSize: number;
 }
 
-/** What the order's detail reads of `GET /api/orders/:id/allergy-notes` (allergy-notes.types.ts). */
-export interface AllergySummary {
-  orderId: string;
-  guests: Array<{ guestId: number; label: string }>;
+/** What the order's detail reads of `GET /api/orders/:id/allergy-notes` (the shared contract). */
+export type AllergySummary = Pick<AllergyNotes, 'orderId' | 'advisoryCount'> & {
+  guests: Array<Pick<AllergyNotes['guests'][number], 'guestId' | 'label'>>;
   /** Guest plates that still conflict with the guest's requirement. */
-  unresolved: Array<{ guestId: number; guest: string; dessertName: string; messages: string[] }>;
-  advisoryCount: number;
-}
+  unresolved: Array<Pick<UnresolvedConflict, 'guestId' | 'guest' | 'dessertName' | 'messages'>>;
+};
 
 /** `GET /api/orders/:id/access-log`: one opening of the guests' health details by the studio. */
-export interface AccessLogEntry {
-  at: string;
-  userId: string | null;
-  name: string | null;
-  role: string;
-  /** allergy_notes, briefing, briefing_pdf or guest_list. */
-  what: string;
-}
+export type { AccessLogEntry } from '@nappe/shared';
 
 /** The parts of `GET /api/studio/settings` the Calendar shows. */
 export interface CalendarSettings {

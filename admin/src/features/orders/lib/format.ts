@@ -87,4 +87,4 @@ export function describeError(error: unknown): string {
   return error.messages.join(' ');
 }
 
-export const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+export { plural } from '@nappe/shared';

@@ -72,8 +72,7 @@ export const money = (minor: number, currency: string): string => formatMoney(mi
 /** "−20 °C", with a real minus sign. */
 export const celsius = (c: number): string => `${c < 0 ? `−${Math.abs(c)}` : String(c)} °C`;
 
-export const plural = (n: number, one: string, many = `${one}s`): string =>
-  `${new Intl.NumberFormat('en-GB').format(n)} ${n === 1 ? one : many}`;
+export { plural } from '@nappe/shared';
 
 export const STEP_KIND_LABELS: Record<StepKind, string> = {
   prep: 'Prepare',
