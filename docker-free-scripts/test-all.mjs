@@ -1,9 +1,11 @@
 // `npm test`: everything CI checks, in the order that fails fastest.
 //   1. lint and type-check every workspace
 //   2. unit tests of every workspace, and the API's e2e tests (supertest on a temporary SQLite file)
+//   2b. the API's tests again on PostgreSQL (a private server; installed with apt-get if missing)
 //   3. the browser suite in Chromium against the running system
 //   4. the durability drill: SIGKILL the API under bookings, five times; nothing acknowledged lost
-// Set NAPPE_SKIP_BROWSER=1 to leave out step 3 while developing (CI never does).
+// Set NAPPE_SKIP_BROWSER=1 to leave out step 3, NAPPE_SKIP_POSTGRES=1 to leave out step 2b, while
+// developing (CI never does).
 import { spawnSync } from 'node:child_process';
 import { performance } from 'node:perf_hooks';
 import { ROOT } from './lib/system.mjs';
@@ -13,6 +15,9 @@ const steps = [
   ['typecheck', ['npm', 'run', 'typecheck', '--silent']],
   ['unit and API tests', ['npm', 'run', 'test', '--workspaces', '--if-present', '--silent']],
 ];
+if (process.env.NAPPE_SKIP_POSTGRES !== '1') {
+  steps.push(['API tests on PostgreSQL', ['node', 'docker-free-scripts/test-postgres.mjs']]);
+}
 if (process.env.NAPPE_SKIP_BROWSER !== '1') {
   steps.push(['browser tests', ['node', 'docker-free-scripts/browser-tests.mjs']]);
   // Runs on the API build the browser step just made.

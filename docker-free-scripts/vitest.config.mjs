@@ -2,7 +2,12 @@ import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
   test: {
-    include: ['payment-fake/**/*.test.mjs', 'bench/**/*.test.mjs', 'lib/**/*.test.mjs'],
+    include: [
+      '*.test.mjs',
+      'payment-fake/**/*.test.mjs',
+      'bench/**/*.test.mjs',
+      'lib/**/*.test.mjs',
+    ],
     environment: 'node',
     testTimeout: 20_000,
   },

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { ThrottlerModule } from '@nestjs/throttler';
+import { DataSource } from 'typeorm';
 import { AllergyNotesModule } from './allergy-notes/allergy-notes.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { ShutdownState } from './common/shutdown.js';
@@ -13,6 +14,7 @@ import { AppThrottlerGuard } from './auth/guards/throttler.guard.js';
 import { ConfigModule } from './config/config.module.js';
 import { Env } from './config/env.js';
 import { DatabaseModule } from './database/database.module.js';
+import { PostgresThrottlerStorage } from './database/postgres-throttler-storage.js';
 import { FilesModule } from './files/files.module.js';
 import { HealthModule } from './health/health.module.js';
 import { KitchenModule } from './kitchen/kitchen.module.js';
@@ -27,9 +29,12 @@ import { InsightsModule } from './insights/insights.module.js';
     ClockModule,
     DatabaseModule,
     ThrottlerModule.forRootAsync({
-      inject: [Env],
-      useFactory: (env: Env) => ({
+      inject: [Env, DataSource],
+      useFactory: (env: Env, dataSource: DataSource) => ({
         throttlers: [{ name: 'default', ttl: 60_000, limit: env.THROTTLE_LIMIT }],
+        // Several API processes may share a PostgreSQL database: count in it, so the limits hold
+        // between them. One process owns a SQLite file: counting in memory is enough.
+        storage: env.DB_TYPE === 'postgres' ? new PostgresThrottlerStorage(dataSource) : undefined,
       }),
     }),
     AuthModule,

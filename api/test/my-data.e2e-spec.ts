@@ -3,6 +3,7 @@ import { In } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { OrderSubstitutionEntity } from '../src/allergy-notes/entities/order-substitution.entity.js';
 import { AuthService } from '../src/auth/auth.service.js';
+import { PasswordResetTokenEntity } from '../src/auth/entities/password-reset-token.entity.js';
 import { AuthSession } from '../src/auth/entities/auth-session.entity.js';
 import { OutboxMessageEntity } from '../src/mail/entities/outbox-message.entity.js';
 import { OrderEventEntity } from '../src/orders/entities/order-event.entity.js';
@@ -329,6 +330,9 @@ describe('DELETE /api/me', () => {
     const dashboardBefore = (
       await app.t.http.get('/api/insights/dashboard').set(bearer(chef)).expect(200)
     ).body;
+    // A password-reset link asked for and never used.
+    await app.t.http.post('/api/auth/password-reset').send({ email: e.email }).expect(202);
+    expect(await repo(PasswordResetTokenEntity).countBy({ userId: e.id })).toBe(1);
 
     const res = await app.t.http
       .delete('/api/me')
@@ -359,6 +363,7 @@ describe('DELETE /api/me', () => {
       sessions.every((s) => s.revokedAt !== null && s.revokedReason === 'account_deleted'),
     ).toBe(true);
     expect(await repo(OutboxMessageEntity).countBy({ toAddress: e.email })).toBe(0);
+    expect(await repo(PasswordResetTokenEntity).countBy({ userId: e.id })).toBe(0);
 
     // The guests are gone, their anonymous counts kept.
     expect(await repo(OrderGuestEntity).countBy({ orderId })).toBe(0);

@@ -3,10 +3,14 @@ import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { Env } from '../config/env.js';
+import { MailModule } from '../mail/mail.module.js';
 import { User } from '../users/entities/user.entity.js';
 import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { AuthSession } from './entities/auth-session.entity.js';
+import { PasswordResetTokenEntity } from './entities/password-reset-token.entity.js';
+import { PasswordResetController } from './password-reset.controller.js';
+import { PasswordResetService } from './password-reset.service.js';
 import { PasswordService } from './password.service.js';
 import { JWT_AUDIENCE, JWT_ISSUER } from './principal.js';
 import { JwtStrategy } from './strategies/jwt.strategy.js';
@@ -14,7 +18,8 @@ import { JwtStrategy } from './strategies/jwt.strategy.js';
 @Module({
   imports: [
     PassportModule,
-    TypeOrmModule.forFeature([User, AuthSession]),
+    TypeOrmModule.forFeature([User, AuthSession, PasswordResetTokenEntity]),
+    MailModule,
     JwtModule.registerAsync({
       inject: [Env],
       useFactory: (env: Env) => ({
@@ -29,8 +34,8 @@ import { JwtStrategy } from './strategies/jwt.strategy.js';
       }),
     }),
   ],
-  controllers: [AuthController],
-  providers: [AuthService, PasswordService, JwtStrategy],
+  controllers: [AuthController, PasswordResetController],
+  providers: [AuthService, PasswordService, JwtStrategy, PasswordResetService],
   exports: [AuthService, PasswordService],
 })
 export class AuthModule {}

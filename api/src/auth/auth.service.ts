@@ -18,6 +18,7 @@ import { AuthSession } from './entities/auth-session.entity.js';
 import { PasswordService } from './password.service.js';
 import { isGuessablePassword, WEAK_PASSWORD_MESSAGE } from './password-strength.js';
 import type { AccessTokenClaims, Principal } from './principal.js';
+import { lockFor, lockKey } from '../database/serialized-writes.js';
 
 /** What a sign-in produces: the body for the client and the refresh token for the cookie. */
 export interface IssuedSession {
@@ -54,6 +55,8 @@ export class AuthService {
     // Hash before taking the connection: never hold the database during slow work.
     const passwordHash = await this.passwords.hash(input.password);
     const user = await this.dataSource.transaction(async (manager) => {
+      // Two sign-ups with one address at once: the second waits, then finds it taken (409).
+      await lockFor(manager, lockKey('account-email', input.email));
       const taken = await manager.exists(User, { where: { email: input.email } });
       if (taken)
         throw new ConflictException('An account with this e-mail already exists. Sign in instead.');
@@ -87,6 +90,9 @@ export class AuthService {
     const newSecret = randomBytes(32).toString('base64url');
 
     const outcome = await this.dataSource.transaction(async (manager) => {
+      // One rotation at a time per session: a second use of the same token then reads the rotated
+      // hashes and is treated as reuse (PostgreSQL; SQLite runs transactions one at a time anyway).
+      await lockFor(manager, { row: AuthSession, id: sessionId });
       const session = await manager.findOne(AuthSession, {
         where: { id: sessionId },
         relations: { user: true },

@@ -23,12 +23,10 @@ export class ShutdownState implements BeforeApplicationShutdown {
     if (!this.stopping) return next();
     res.setHeader('Connection', 'close');
     res.setHeader('Retry-After', '5');
-    res
-      .status(503)
-      .json({
-        statusCode: 503,
-        message: 'The service is restarting. Try again in a moment.',
-        error: 'Service Unavailable',
-      });
+    res.status(503).json({
+      statusCode: 503,
+      message: 'The service is restarting. Try again in a moment.',
+      error: 'Service Unavailable',
+    });
   };
 }

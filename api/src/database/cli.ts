@@ -1,8 +1,8 @@
 import 'reflect-metadata';
 import * as argon2 from 'argon2';
 import { EnvError, validateEnv } from '../config/env.js';
-import { assertDurableSqlite } from './database-health.js';
-import { openDataSource } from './data-source.js';
+import { assertDurableDatabase } from './database-health.js';
+import { databaseTarget, openDataSource } from './data-source.js';
 import { seedDemo, SeedRefusedError } from './demo-seed.js';
 
 /**
@@ -12,12 +12,14 @@ import { seedDemo, SeedRefusedError } from './demo-seed.js';
  */
 async function main(command: string | undefined): Promise<void> {
   const env = validateEnv(process.env);
-  const dataSource = await openDataSource(env.DATABASE_PATH);
+  const dataSource = await openDataSource(databaseTarget(env));
   try {
-    await assertDurableSqlite(dataSource);
+    await assertDurableDatabase(dataSource);
     switch (command) {
       case 'migrate':
-        console.log(`Database ready at ${env.DATABASE_PATH} (migrations applied).`);
+        console.log(
+          `Database ready ${env.DB_TYPE === 'postgres' ? 'on PostgreSQL' : `at ${env.DATABASE_PATH}`} (migrations applied).`,
+        );
         break;
       case 'revert':
         await dataSource.undoLastMigration({ transaction: 'each' });

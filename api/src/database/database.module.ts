@@ -1,21 +1,24 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
 import { Env } from '../config/env.js';
-import { assertDurableSqlite } from './database-health.js';
-import { dataSourceOptions, openDataSource } from './data-source.js';
+import { assertDurableDatabase } from './database-health.js';
+import { databaseTarget, dataSourceOptions, prepareDataSource } from './data-source.js';
 
 /**
- * SQLite on a file: migrations applied at start (never `synchronize`), the connection lock
- * installed, and the durability pragmas asserted before the first request.
+ * SQLite on a file (the default) or PostgreSQL at DATABASE_URL: migrations applied at start
+ * (never `synchronize`), on SQLite the connection lock installed, and the durability settings
+ * asserted before the first request.
  */
 @Module({
   imports: [
     TypeOrmModule.forRootAsync({
       inject: [Env],
-      useFactory: (env: Env) => dataSourceOptions(env.DATABASE_PATH),
+      useFactory: (env: Env) => dataSourceOptions(databaseTarget(env)),
       dataSourceFactory: async (options) => {
-        const dataSource = await openDataSource(String(options?.database));
-        await assertDurableSqlite(dataSource);
+        if (!options) throw new Error('No database options');
+        const dataSource = await prepareDataSource(new DataSource(options));
+        await assertDurableDatabase(dataSource);
         return dataSource;
       },
     }),

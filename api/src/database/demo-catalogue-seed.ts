@@ -12,6 +12,7 @@ import type { DataSource } from 'typeorm';
 import { removePhotoVariants, renderPhotoVariants } from '../files/photo-variants.js';
 import type { StoredPhoto } from '../files/stored-photo.js';
 import { uploadsDirFor } from '../files/uploads-dir.js';
+import { dataPathOf } from './data-source.js';
 import {
   dessertToRows,
   ingredientToRow,
@@ -93,7 +94,7 @@ export async function seedDemoCatalogue(
     );
   }
   const catalogue = withDemoUuids(source);
-  const dir = uploadsDirFor(String(dataSource.options.database));
+  const dir = uploadsDirFor(dataPathOf(dataSource));
   const dessertNames = new Map(catalogue.desserts.map((d) => [d.id, d.name]));
 
   const rendered: StoredPhoto[] = [];

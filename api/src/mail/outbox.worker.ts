@@ -12,6 +12,7 @@ import { Env } from '../config/env.js';
 import { DocumentsService } from '../documents/documents.service.js';
 import { OutboxMessageEntity } from './entities/outbox-message.entity.js';
 import { MAIL_TRANSPORT, type MailTransport } from './mail-transport.js';
+import { lockFor, OUTBOX_CLAIM } from '../database/serialized-writes.js';
 
 /** After this many failed attempts a message is marked `failed` (about 13 hours of retries). */
 export const OUTBOX_MAX_ATTEMPTS = 20;
@@ -116,6 +117,9 @@ export class OutboxWorker implements OnApplicationBootstrap, OnApplicationShutdo
   }
 
   private async claim(m: EntityManager, limit: number): Promise<OutboxMessageEntity[]> {
+    // One claim at a time, across API processes too (PostgreSQL): a message due now is marked
+    // `sending` by exactly one drain, which alone sends it.
+    await lockFor(m, OUTBOX_CLAIM);
     const now = this.clock.now();
     const stuckBefore = new Date(now.getTime() - STUCK_SENDING_MS);
     const due = await m.find(OutboxMessageEntity, {

@@ -3,6 +3,7 @@ import { ConflictException, NotFoundException } from '@nestjs/common';
 import { OrderStatus, Role, transition, type OrderActor } from '@nappe/shared';
 import { In, type EntityManager } from 'typeorm';
 import type { Principal } from '../auth/principal.js';
+import { lockFor } from '../database/serialized-writes.js';
 import { OrderEventEntity, type OrderEventActorRole } from './entities/order-event.entity.js';
 import { OrderEntity } from './entities/order.entity.js';
 
@@ -29,13 +30,16 @@ export function noSuchOrder(): NotFoundException {
 
 /**
  * The order as `principal` may see it: a client only their own (another client's id is simply
- * not found — OWASP API1), the chef and staff any.
+ * not found — OWASP API1), the chef and staff any. Call it first in the transaction: on
+ * PostgreSQL it locks the order's row until the transaction ends, so every change to a booking
+ * and its ledger runs one at a time, as on SQLite (serialized-writes.ts).
  */
 export async function orderFor(
   manager: EntityManager,
   principal: Principal,
   id: string,
 ): Promise<OrderEntity> {
+  await lockFor(manager, { row: OrderEntity, id });
   const order = await manager.findOneBy(OrderEntity, { id });
   if (!order || (principal.role === Role.Client && order.clientId !== principal.id)) {
     throw noSuchOrder();

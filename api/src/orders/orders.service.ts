@@ -21,6 +21,7 @@ import {
   isIsoDate,
   menuBookingRules,
   OrderStatus,
+  plural,
   refundFor,
   requote,
   Role,
@@ -53,6 +54,7 @@ import { RefundService } from '../payments/refunds.service.js';
 import { bookingTermsOf, CHECKOUT_HOLD_MINUTES } from '../studio/booking-settings.js';
 import { User } from '../users/entities/user.entity.js';
 import { BookingContext } from './booking-context.js';
+import { DAY_BOOK, lockFor } from '../database/serialized-writes.js';
 import { platesTaken } from './capacity.js';
 import type { AvailabilityQuery, ListOrdersQuery } from './dto/order-queries.js';
 import { OrderGuestEntity } from './entities/order-guest.entity.js';
@@ -98,8 +100,6 @@ function guestRows(orderId: string, guests: readonly GuestRequirement[]): OrderG
     notes: g.notes ?? null,
   }));
 }
-
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 /**
  * Bookings: the quote, availability, creating an order (capacity checked and held in the same
@@ -197,6 +197,10 @@ export class OrdersService {
     const requestHash = createHash('sha256').update(canonicalJson(body)).digest('hex');
     try {
       return await this.dataSource.transaction(async (m) => {
+        // One booking at a time (PostgreSQL; SQLite runs alone anyway): the capacity check and
+        // the insert, the year's next reference, the client's unpaid bookings and a replay of
+        // the same Idempotency-Key all see every booking committed before.
+        await lockFor(m, DAY_BOOK);
         const existing = await m.findOneBy(OrderEntity, {
           clientId: principal.id,
           clientRequestId: idempotencyKey,
@@ -709,6 +713,7 @@ export class OrdersService {
       if (change.change === 'increase') {
         const perGuest = Math.max(1, Math.round(order.plates / order.guestCount));
         const plates = body.guestCount * perGuest;
+        await lockFor(m, DAY_BOOK); // more plates from the day: one booking change at a time
         const taken =
           (await platesTaken(m, order.eventDate, order.eventDate, now, order.id)).get(
             order.eventDate,

@@ -13,6 +13,7 @@ import { DataSource, IsNull, type EntityManager } from 'typeorm';
 import type { Principal } from '../auth/principal.js';
 import { PAYMENT_KIND_LABELS } from '../documents/documents.service.js';
 import { BookingContext } from '../orders/booking-context.js';
+import { DAY_BOOK, lockFor } from '../database/serialized-writes.js';
 import { platesTaken } from '../orders/capacity.js';
 import { OrderEntity } from '../orders/entities/order.entity.js';
 import { amountToPay, summarizeLedger, type CheckoutPlan } from '../orders/order-money.js';
@@ -109,6 +110,7 @@ export class CheckoutService {
     if (order.status === OrderStatus.PendingPayment && (!holdBefore || holdBefore <= now)) {
       // The hold ended: the plates were free for others meanwhile. Take them again if they are there.
       const menu = await this.context.menu(m, order.menuId);
+      await lockFor(m, DAY_BOOK); // taking plates from the day again: one booking at a time
       const taken = await platesTaken(m, order.eventDate, order.eventDate, now, order.id);
       const check = canBook(order.eventDate, order.guestCount, {
         settings: studio.settings,

@@ -4,6 +4,7 @@ import { formatMoney, OrderStatus, type PaymentKind } from '@nappe/shared';
 import type Stripe from 'stripe';
 import { In, type EntityManager } from 'typeorm';
 import { Clock } from '../common/clock.js';
+import { lockFor } from '../database/serialized-writes.js';
 import { PAYMENT_KIND_LABELS } from '../documents/documents.service.js';
 import { OrderEntity } from '../orders/entities/order.entity.js';
 import { balanceOf, isBooked, summarizeLedger } from '../orders/order-money.js';
@@ -35,7 +36,9 @@ function idOf(value: string | { id: string } | null | undefined): string | null 
  * What the payment service tells us, applied to the ledger and the order — once, however often
  * and in whatever order it is told. Every method runs inside the caller's transaction (the
  * webhook's, with its event-id row; or the return-from-checkout's), and decides from the rows it
- * reads there, so a duplicate or a concurrent call finds the work done and does nothing.
+ * reads there, so a duplicate or a concurrent call finds the work done and does nothing. Each
+ * first locks the order the payment belongs to (PostgreSQL; see `lockOrderOf`), so the webhook
+ * and the return from checkout apply a payment one after the other, never side by side.
  */
 @Injectable()
 export class Fulfilment {
@@ -88,6 +91,7 @@ export class Fulfilment {
   }
 
   async recordPaid(m: EntityManager, paid: PaidCheckout): Promise<FulfilmentOutcome> {
+    await this.lockOrderOf(m, paid.sessionId, paid.paymentId, paid.orderId);
     const now = this.clock.now();
     let row =
       (paid.sessionId
@@ -205,6 +209,7 @@ export class Fulfilment {
     m: EntityManager,
     session: Stripe.Checkout.Session,
   ): Promise<FulfilmentOutcome> {
+    await this.lockOrderOf(m, session.id, session.metadata?.paymentId ?? null, null);
     const now = this.clock.now();
     const row =
       (await m.findOneBy(PaymentEntity, { providerSessionId: session.id })) ??
@@ -246,6 +251,24 @@ export class Fulfilment {
   }
 
   /**
+   * Locks the order a payment belongs to (its ledger row's, else the one the payment service's
+   * metadata names) before anything is read to decide on: what is read after it includes
+   * whatever a concurrent call for the same order committed.
+   */
+  private async lockOrderOf(
+    m: EntityManager,
+    sessionId: string | null,
+    paymentId: string | null,
+    orderId: string | null,
+  ): Promise<void> {
+    const row =
+      (sessionId ? await m.findOneBy(PaymentEntity, { providerSessionId: sessionId }) : null) ??
+      (paymentId ? await m.findOneBy(PaymentEntity, { id: paymentId }) : null);
+    const id = row?.orderId ?? orderId;
+    if (id) await lockFor(m, { row: OrderEntity, id });
+  }
+
+  /**
    * `charge.refunded`: the charge's cumulative refunded amount against the refunds the ledger
    * knows for that payment (settled or on their way). Anything more was refunded at the payment
    * service directly and is recorded now, so the ledger keeps matching the service.
@@ -257,6 +280,8 @@ export class Fulfilment {
   ): Promise<FulfilmentOutcome> {
     const intentId = idOf(charge.payment_intent);
     if (!intentId) return 'ignored';
+    const paymentOf = await m.findOneBy(PaymentEntity, { providerPaymentIntentId: intentId });
+    if (paymentOf) await lockFor(m, { row: OrderEntity, id: paymentOf.orderId });
     const source = await m.findOneBy(PaymentEntity, {
       providerPaymentIntentId: intentId,
       kind: In([...MONEY_IN]),

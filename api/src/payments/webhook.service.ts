@@ -2,13 +2,16 @@ import { Injectable, Logger } from '@nestjs/common';
 import type Stripe from 'stripe';
 import { DataSource } from 'typeorm';
 import { Clock } from '../common/clock.js';
+import { lockFor, lockKey } from '../database/serialized-writes.js';
 import { ProcessedWebhookEventEntity } from './entities/processed-webhook-event.entity.js';
 import { Fulfilment } from './fulfilment.js';
 
 /**
  * Applies verified webhook events, each id once: the `processed_webhook_events` row is written
  * in the same transaction as the event's effect, so a duplicate (or a concurrent delivery of the
- * same event) finds it and does nothing, and a failure leaves neither.
+ * same event) finds it and does nothing, and a failure leaves neither. On PostgreSQL concurrent
+ * deliveries of one id wait for each other on a lock named after it, so the later one finds the
+ * row instead of failing on its key.
  */
 @Injectable()
 export class WebhookService {
@@ -22,6 +25,7 @@ export class WebhookService {
 
   async apply(event: Stripe.Event): Promise<'applied' | 'duplicate'> {
     return this.dataSource.transaction(async (m) => {
+      await lockFor(m, lockKey('webhook-event', event.id));
       if (await m.findOneBy(ProcessedWebhookEventEntity, { eventId: event.id })) return 'duplicate';
       await m.insert(ProcessedWebhookEventEntity, {
         eventId: event.id,

@@ -8,6 +8,7 @@ import {
 import { dateInTimeZone, formatIsoDate, OrderStatus } from '@nappe/shared';
 import { DataSource, In, MoreThanOrEqual } from 'typeorm';
 import { AuthService } from '../auth/auth.service.js';
+import { PasswordResetTokenEntity } from '../auth/entities/password-reset-token.entity.js';
 import { PasswordService } from '../auth/password.service.js';
 import type { Principal } from '../auth/principal.js';
 import { Clock } from '../common/clock.js';
@@ -21,6 +22,7 @@ import { User } from '../users/entities/user.entity.js';
 import { PrivacyAuditEntity } from './entities/privacy-audit.entity.js';
 import { purgeGuestDetails } from './guest-purge.js';
 import type { AccountDeletionResult } from './privacy.types.js';
+import { DAY_BOOK, lockFor } from '../database/serialized-writes.js';
 
 /** What an erased client becomes: an anonymous reference the studio's records still point at. */
 export const ERASED_NAME = 'Deleted client';
@@ -47,7 +49,7 @@ export const KEPT_RECORDS = [
 
 export const ERASED_DATA = [
   'Your name, e-mail address and password',
-  'Your sign-in sessions on every device',
+  'Your sign-in sessions on every device, and any password-reset link',
   'Your guests’ names, tables, allergies, diets and notes, and the chef’s per-guest changes',
   'The venue address, contact phone and occasion of each booking',
   'Reasons you wrote when changing or cancelling a booking',
@@ -84,6 +86,14 @@ export class AccountDeletionService {
     }
 
     return this.dataSource.transaction(async (m) => {
+      // PostgreSQL: the client's orders (each as `orderFor` locks it, in id order), then the day
+      // book, so no change to those orders and no new booking of theirs runs alongside.
+      const own = await m.find(OrderEntity, {
+        select: { id: true },
+        where: { clientId: principal.id },
+      });
+      const ids = own.map((o) => o.id).sort();
+      await lockFor(m, ...ids.map((id) => ({ row: OrderEntity, id })), DAY_BOOK);
       const user = await m.findOneByOrFail(User, { id: principal.id });
       const studio = await m.findOneByOrFail(StudioSettings, { id: 1 });
       const now = this.clock.now();
@@ -149,6 +159,8 @@ export class AccountDeletionService {
 
       await m.delete(OutboxMessageEntity, { toAddress: user.email });
       await this.auth.revokeAllSessions(m, user.id, 'account_deleted', now);
+      // Reset links hold only hashes and die with the password, but nothing of the account stays.
+      await m.delete(PasswordResetTokenEntity, { userId: user.id });
       await m.update(
         User,
         { id: user.id },

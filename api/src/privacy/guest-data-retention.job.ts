@@ -13,6 +13,7 @@ import { recordEvent, SYSTEM } from '../orders/order-records.js';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { holdsGuestDetailsSql, purgeGuestDetails, type OrderGuestPurge } from './guest-purge.js';
 import { guestDetailsExpired } from './guest-retention.js';
+import { lockFor } from '../database/serialized-writes.js';
 
 /** What one run removed: counts and order ids, never guest data. */
 export interface RetentionReport {
@@ -100,6 +101,7 @@ export class GuestDataRetentionJob implements OnApplicationBootstrap, OnApplicat
     };
     for (const id of plan.ids) {
       const done = await this.dataSource.transaction(async (m) => {
+        await lockFor(m, { row: OrderEntity, id }); // as every change to an order (orderFor)
         const order = await m.findOneBy(OrderEntity, { id });
         if (!order || !guestDetailsExpired(order.eventDate, plan.days, plan.today)) return null;
         const now = this.clock.now();

@@ -24,6 +24,7 @@ import type {
   RoleChangeBody,
   TeamMemberView,
 } from './team.bodies.js';
+import { lockFor, lockKey } from '../database/serialized-writes.js';
 
 /** How long an invitation link works. */
 export const INVITATION_TTL_DAYS = 7;
@@ -152,7 +153,13 @@ export class TeamService {
     const passwordHash = await this.passwords.hash(body.password);
     const user = await this.dataSource.transaction(async (m) => {
       const now = this.clock.now();
-      // Checked again inside the transaction: two tabs submitting the same link, one wins.
+      // Checked again inside the transaction: two tabs submitting the same link, one wins (on
+      // PostgreSQL the second waits on the invitation's row, then finds it used).
+      await lockFor(
+        m,
+        { row: StaffInvitationEntity, id: found.id },
+        lockKey('account-email', found.email),
+      );
       const inv = await m.findOneBy(StaffInvitationEntity, { tokenHash });
       const again = unusableReason(inv, now);
       if (again || !inv) throw new BadRequestException([again]);

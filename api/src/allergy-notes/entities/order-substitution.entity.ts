@@ -1,5 +1,8 @@
 import type { Substitution } from '@nappe/shared';
-import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { Column, Entity, ForeignKey, Index, PrimaryColumn } from 'typeorm';
+import { OrderEntity } from '../../orders/entities/order.entity.js';
+import { User } from '../../users/entities/user.entity.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 /**
  * What the chef changes on one guest's plate of one dessert: components left out or replaced
@@ -14,6 +17,7 @@ export class OrderSubstitutionEntity {
   @PrimaryColumn({ type: 'varchar', length: 36 })
   id: string;
 
+  @ForeignKey(() => OrderEntity, { onDelete: 'CASCADE' })
   @Column({ name: 'order_id', type: 'varchar', length: 36 })
   orderId: string;
 
@@ -32,9 +36,10 @@ export class OrderSubstitutionEntity {
   @Column({ type: 'varchar', length: 500, nullable: true })
   note: string | null;
 
+  @ForeignKey(() => User, { onDelete: 'SET NULL' })
   @Column({ name: 'recorded_by', type: 'varchar', length: 36, nullable: true })
   recordedBy: string | null;
 
-  @Column({ name: 'recorded_at', type: 'datetime' })
+  @Column({ name: 'recorded_at', type: TIMESTAMP })
   recordedAt: Date;
 }

@@ -17,8 +17,15 @@ import {
   type ValidationOptions,
 } from 'class-validator';
 
+/** What registration (and choosing a new password) says about a password's length. */
+export const PASSWORD_LENGTH_MESSAGE = `Use at least ${PASSWORD_MIN_LENGTH} characters (at most ${PASSWORD_MAX_LENGTH}) — a few words make a good passphrase.`;
+
 /** Length in Unicode code points (what a person counts), per the shared password rule. */
-function CodePointLength(min: number, max: number, options?: ValidationOptions): PropertyDecorator {
+export function CodePointLength(
+  min: number,
+  max: number,
+  options?: ValidationOptions,
+): PropertyDecorator {
   return (target, propertyName) =>
     registerDecorator({
       name: 'codePointLength',
@@ -54,8 +61,6 @@ export class RegisterDto {
 
   @ApiProperty({ minLength: PASSWORD_MIN_LENGTH, maxLength: PASSWORD_MAX_LENGTH })
   @IsString()
-  @CodePointLength(PASSWORD_MIN_LENGTH, PASSWORD_MAX_LENGTH, {
-    message: `Use at least ${PASSWORD_MIN_LENGTH} characters (at most ${PASSWORD_MAX_LENGTH}) — a few words make a good passphrase.`,
-  })
+  @CodePointLength(PASSWORD_MIN_LENGTH, PASSWORD_MAX_LENGTH, { message: PASSWORD_LENGTH_MESSAGE })
   password: string;
 }

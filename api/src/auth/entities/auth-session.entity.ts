@@ -8,6 +8,7 @@ import {
   PrimaryColumn,
 } from 'typeorm';
 import { User } from '../../users/entities/user.entity.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 /**
  * One signed-in session (one device). The access token names it (`sid`), so revoking the
@@ -35,18 +36,18 @@ export class AuthSession {
   @Column({ name: 'previous_refresh_hash', type: 'varchar', length: 64, nullable: true })
   previousRefreshHash: string | null;
 
-  @Column({ name: 'expires_at', type: 'datetime' })
+  @Column({ name: 'expires_at', type: TIMESTAMP })
   expiresAt: Date;
 
-  @Column({ name: 'revoked_at', type: 'datetime', nullable: true })
+  @Column({ name: 'revoked_at', type: TIMESTAMP, nullable: true })
   revokedAt: Date | null;
 
   @Column({ name: 'revoked_reason', type: 'varchar', length: 32, nullable: true })
   revokedReason: string | null;
 
-  @CreateDateColumn({ name: 'created_at' })
+  @CreateDateColumn({ name: 'created_at', type: TIMESTAMP })
   createdAt: Date;
 
-  @Column({ name: 'last_used_at', type: 'datetime' })
+  @Column({ name: 'last_used_at', type: TIMESTAMP })
   lastUsedAt: Date;
 }

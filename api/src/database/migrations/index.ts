@@ -6,6 +6,8 @@ import { AllergyNotesAndPrep1765200000000 } from './1765200000000-allergy-notes-
 import { SettingsAndTeam1765100000000 } from './1765100000000-settings-and-team.js';
 import { GuestDataPrivacy1765460000000 } from './1765460000000-guest-data-privacy.js';
 import { PrepTickBatches1765600000000 } from './1765600000000-prep-tick-batches.js';
+import { PasswordResetTokens1765700000000 } from './1765700000000-password-reset-tokens.js';
+import { RateLimitHits1765810000000 } from './1765810000000-rate-limit-hits.js';
 
 /** Every migration, in order. Listed as classes (a glob does not work with ESM builds). */
 export const migrations = [
@@ -17,4 +19,6 @@ export const migrations = [
   AllergyNotesAndPrep1765200000000,
   GuestDataPrivacy1765460000000,
   PrepTickBatches1765600000000,
+  PasswordResetTokens1765700000000,
+  RateLimitHits1765810000000,
 ];

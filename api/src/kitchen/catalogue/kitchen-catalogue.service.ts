@@ -28,6 +28,7 @@ import {
   menuFromRows,
   recipeFromRows,
 } from './catalogue-rows.js';
+import { KITCHEN_CATALOGUE, lockFor } from '../../database/serialized-writes.js';
 
 /** The whole catalogue as the computation wants it, with the rows it came from. */
 export interface LoadedCatalogue {
@@ -135,15 +136,21 @@ export class KitchenCatalogueService {
   /**
    * Goes up after every write through `transaction()`, so readers can cache what they derive
    * from the catalogue (the public menu cards) and know when to throw it away. One process
-   * owns the SQLite file; several processes on PostgreSQL would need the revision in a table.
+   * owns the SQLite file and sees every write.
    */
   private generation = 0;
 
   constructor(private readonly dataSource: DataSource) {}
 
-  /** The catalogue's revision: read it BEFORE loading, tag what you derive with it. */
+  /**
+   * The catalogue's revision: read it BEFORE loading, tag what you derive with it. On PostgreSQL
+   * another API process may change the catalogue without this one knowing, so there the revision
+   * also moves on every second: what is derived is at most a second behind another process's
+   * write, and at once up to date with this process's own.
+   */
   get revision(): number {
-    return this.generation;
+    if (this.dataSource.options.type !== 'postgres') return this.generation;
+    return Math.floor(Date.now() / 1000) * 1000 + (this.generation % 1000);
   }
 
   /** For writers outside this service whose changes show in the catalogue (studio currency). */
@@ -151,10 +158,17 @@ export class KitchenCatalogueService {
     this.generation += 1;
   }
 
-  /** Runs `work` in one transaction (every multi-row write goes through here). */
+  /**
+   * Runs `work` in one transaction (every multi-row write goes through here). Writes are checked
+   * against the whole catalogue (no recipe loops, nothing in use deleted), so on PostgreSQL these
+   * transactions take the catalogue's lock and run one at a time, as on SQLite.
+   */
   async transaction<T>(work: (manager: EntityManager) => Promise<T>): Promise<T> {
     try {
-      return await this.dataSource.transaction(work);
+      return await this.dataSource.transaction(async (manager) => {
+        await lockFor(manager, KITCHEN_CATALOGUE);
+        return work(manager);
+      });
     } finally {
       this.generation += 1;
     }

@@ -1,5 +1,6 @@
 import type { Composition, DietaryInfo, IngredientAllergens, Unit } from '@nappe/shared';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 @Entity({ name: 'ingredients' })
 export class IngredientEntity {
@@ -44,9 +45,9 @@ export class IngredientEntity {
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
-  @CreateDateColumn({ name: 'created_at' })
+  @CreateDateColumn({ name: 'created_at', type: TIMESTAMP })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at' })
+  @UpdateDateColumn({ name: 'updated_at', type: TIMESTAMP })
   updatedAt: Date;
 }

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import type { StoredPhoto } from '../../files/stored-photo.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 /** A menu: the desserts every guest is served (rows of `menu_desserts`), its price and limits. */
 @Entity({ name: 'menus' })
@@ -31,12 +32,12 @@ export class MenuEntity {
   active: boolean;
 
   /** Set by photo uploads only, never by a request body. */
-  @Column({ type: 'simple-json' })
+  @Column({ type: 'simple-json', default: '[]' })
   photos: StoredPhoto[];
 
-  @CreateDateColumn({ name: 'created_at' })
+  @CreateDateColumn({ name: 'created_at', type: TIMESTAMP })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at' })
+  @UpdateDateColumn({ name: 'updated_at', type: TIMESTAMP })
   updatedAt: Date;
 }

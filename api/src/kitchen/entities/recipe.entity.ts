@@ -1,5 +1,6 @@
 import type { Equipment, MethodStep, StorageKind } from '@nappe/shared';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 /** A recipe (a component or a sub-preparation). Its lines are rows of `recipe_lines`. */
 @Entity({ name: 'recipes' })
@@ -36,9 +37,9 @@ export class RecipeEntity {
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
-  @CreateDateColumn({ name: 'created_at' })
+  @CreateDateColumn({ name: 'created_at', type: TIMESTAMP })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at' })
+  @UpdateDateColumn({ name: 'updated_at', type: TIMESTAMP })
   updatedAt: Date;
 }

@@ -1,4 +1,6 @@
-import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { Column, Entity, ForeignKey, Index, PrimaryColumn } from 'typeorm';
+import { OrderEntity } from '../../orders/entities/order.entity.js';
+import { NOW_DEFAULT, TIMESTAMP } from '../../database/portable-schema.js';
 
 export type OutboxStatus = 'pending' | 'sending' | 'sent' | 'failed';
 
@@ -20,6 +22,7 @@ export class OutboxMessageEntity {
   @Column({ type: 'varchar', length: 40 })
   kind: string;
 
+  @ForeignKey(() => OrderEntity, { onDelete: 'SET NULL' })
   @Column({ name: 'order_id', type: 'varchar', length: 36, nullable: true })
   orderId: string | null;
 
@@ -35,27 +38,27 @@ export class OutboxMessageEntity {
   @Column({ name: 'html_body', type: 'text' })
   htmlBody: string;
 
-  @Column({ type: 'simple-json' })
+  @Column({ type: 'simple-json', default: '[]' })
   attachments: OutboxAttachment[];
 
   @Column({ type: 'varchar', length: 8 })
   status: OutboxStatus;
 
-  @Column({ type: 'integer' })
+  @Column({ type: 'integer', default: 0 })
   attempts: number;
 
-  @Column({ name: 'next_attempt_at', type: 'datetime' })
+  @Column({ name: 'next_attempt_at', type: TIMESTAMP })
   nextAttemptAt: Date;
 
-  @Column({ name: 'sent_at', type: 'datetime', nullable: true })
+  @Column({ name: 'sent_at', type: TIMESTAMP, nullable: true })
   sentAt: Date | null;
 
   @Column({ name: 'last_error', type: 'varchar', length: 500, nullable: true })
   lastError: string | null;
 
-  @Column({ name: 'created_at', type: 'datetime' })
+  @Column({ name: 'created_at', type: TIMESTAMP })
   createdAt: Date;
 
-  @Column({ name: 'updated_at', type: 'datetime' })
+  @Column({ name: 'updated_at', type: TIMESTAMP, default: NOW_DEFAULT })
   updatedAt: Date;
 }

@@ -2,6 +2,7 @@ import type { OrderStatus } from '@nappe/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { User } from '../../users/entities/user.entity.js';
 import { OrderEntity } from './order.entity.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 export type OrderEventActorRole = 'client' | 'chef' | 'staff' | 'system';
 
@@ -46,6 +47,6 @@ export class OrderEventEntity {
   @Column({ type: 'varchar', length: 500, nullable: true })
   reason: string | null;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: TIMESTAMP })
   at: Date;
 }

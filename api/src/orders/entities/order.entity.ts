@@ -2,6 +2,7 @@ import type { OrderStatus, PricingSnapshot, Quote } from '@nappe/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { MenuEntity } from '../../kitchen/entities/menu.entity.js';
 import { User } from '../../users/entities/user.entity.js';
+import { NOW_DEFAULT, TIMESTAMP } from '../../database/portable-schema.js';
 
 /**
  * A booking. Its money is fixed by `pricing` (what the menu and the studio's settings were when
@@ -10,6 +11,9 @@ import { User } from '../../users/entities/user.entity.js';
  * plates; a `pending_payment` order holds them until `holdExpiresAt`.
  */
 @Entity({ name: 'orders' })
+@Index('UQ_orders_client_request', ['clientId', 'clientRequestId'], { unique: true })
+@Index('IDX_orders_event_date_status', ['eventDate', 'status'])
+@Index('IDX_orders_status', ['status', 'createdAt'])
 export class OrderEntity {
   @PrimaryColumn({ type: 'varchar', length: 36 })
   id: string;
@@ -68,7 +72,7 @@ export class OrderEntity {
   totalMinor: number;
 
   /** Paid money kept under the cancellation policy when guests were removed. */
-  @Column({ name: 'retained_minor', type: 'integer' })
+  @Column({ name: 'retained_minor', type: 'integer', default: 0 })
   retainedMinor: number;
 
   @Column({ type: 'simple-json' })
@@ -85,16 +89,16 @@ export class OrderEntity {
   @Column({ name: 'request_hash', type: 'varchar', length: 64 })
   requestHash: string;
 
-  @Column({ name: 'hold_expires_at', type: 'datetime', nullable: true })
+  @Column({ name: 'hold_expires_at', type: TIMESTAMP, nullable: true })
   holdExpiresAt: Date | null;
 
   /** Bumped whenever a new checkout is opened, so each amount gets its own idempotency key. */
-  @Column({ name: 'amount_version', type: 'integer' })
+  @Column({ name: 'amount_version', type: 'integer', default: 1 })
   amountVersion: number;
 
-  @Column({ name: 'created_at', type: 'datetime' })
+  @Column({ name: 'created_at', type: TIMESTAMP, default: NOW_DEFAULT })
   createdAt: Date;
 
-  @Column({ name: 'updated_at', type: 'datetime' })
+  @Column({ name: 'updated_at', type: TIMESTAMP, default: NOW_DEFAULT })
   updatedAt: Date;
 }

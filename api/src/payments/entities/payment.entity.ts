@@ -1,6 +1,7 @@
 import type { PaymentKind, PaymentRecordStatus } from '@nappe/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn } from 'typeorm';
 import { OrderEntity } from '../../orders/entities/order.entity.js';
+import { NOW_DEFAULT, TIMESTAMP } from '../../database/portable-schema.js';
 
 /** Why a refund was made. `reconciled`: found at the payment service (a refund made there). */
 export type RefundOperation = 'cancel' | 'decline' | 'guest_change' | 'reconciled';
@@ -48,7 +49,7 @@ export class PaymentEntity {
   @Column({ name: 'checkout_url', type: 'varchar', length: 2000, nullable: true })
   checkoutUrl: string | null;
 
-  @Column({ name: 'checkout_expires_at', type: 'datetime', nullable: true })
+  @Column({ name: 'checkout_expires_at', type: TIMESTAMP, nullable: true })
   checkoutExpiresAt: Date | null;
 
   @Index('IDX_payments_intent')
@@ -78,15 +79,15 @@ export class PaymentEntity {
   failureMessage: string | null;
 
   /** Demo data written by the seed, never sent to the payment service. */
-  @Column({ type: 'boolean' })
+  @Column({ type: 'boolean', default: false })
   seeded: boolean;
 
-  @Column({ name: 'created_at', type: 'datetime' })
+  @Column({ name: 'created_at', type: TIMESTAMP })
   createdAt: Date;
 
-  @Column({ name: 'settled_at', type: 'datetime', nullable: true })
+  @Column({ name: 'settled_at', type: TIMESTAMP, nullable: true })
   settledAt: Date | null;
 
-  @Column({ name: 'updated_at', type: 'datetime' })
+  @Column({ name: 'updated_at', type: TIMESTAMP, default: NOW_DEFAULT })
   updatedAt: Date;
 }

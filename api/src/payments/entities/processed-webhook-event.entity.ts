@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 /** A webhook event already applied: inserted in the same transaction as its effect. */
 @Entity({ name: 'processed_webhook_events' })
@@ -9,6 +10,6 @@ export class ProcessedWebhookEventEntity {
   @Column({ type: 'varchar', length: 100 })
   type: string;
 
-  @Column({ name: 'processed_at', type: 'datetime' })
+  @Column({ name: 'processed_at', type: TIMESTAMP })
   processedAt: Date;
 }

@@ -1,4 +1,7 @@
-import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { Column, Entity, ForeignKey, Index, PrimaryColumn } from 'typeorm';
+import { OrderEntity } from '../../orders/entities/order.entity.js';
+import { User } from '../../users/entities/user.entity.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 export type ConsentKind = 'booking_terms' | 'guest_data';
 
@@ -13,9 +16,11 @@ export class ConsentRecordEntity {
   id: string;
 
   /** Who confirmed (a client, or the chef entering guests for them). */
+  @ForeignKey(() => User, { onDelete: 'SET NULL' })
   @Column({ name: 'user_id', type: 'varchar', length: 36, nullable: true })
   userId: string | null;
 
+  @ForeignKey(() => OrderEntity, { onDelete: 'CASCADE' })
   @Column({ name: 'order_id', type: 'varchar', length: 36 })
   orderId: string;
 
@@ -26,6 +31,6 @@ export class ConsentRecordEntity {
   @Column({ type: 'varchar', length: 300 })
   statement: string;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: TIMESTAMP })
   at: Date;
 }

@@ -1,6 +1,7 @@
 import type { Substitution } from '@nappe/shared';
 import { Column, Entity, JoinColumn, OneToOne, PrimaryColumn } from 'typeorm';
 import { OrderEntity } from '../../orders/entities/order.entity.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 /** Why an order's guest details were removed. */
 export type GuestDetailsRemovalReason = 'retention' | 'account_deleted';
@@ -53,6 +54,6 @@ export class OrderGuestSummaryEntity {
   @Column({ name: 'retention_days', type: 'integer', nullable: true })
   retentionDays: number | null;
 
-  @Column({ name: 'removed_at', type: 'datetime' })
+  @Column({ name: 'removed_at', type: TIMESTAMP })
   removedAt: Date;
 }

@@ -1,4 +1,6 @@
-import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { Column, Entity, ForeignKey, Index, PrimaryColumn } from 'typeorm';
+import { User } from '../../users/entities/user.entity.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 export type PrivacyAuditAction = 'data_exported' | 'account_deleted';
 
@@ -16,6 +18,7 @@ export class PrivacyAuditEntity {
   @Column({ type: 'varchar', length: 20 })
   action: PrivacyAuditAction;
 
+  @ForeignKey(() => User, { onDelete: 'RESTRICT' })
   @Column({ name: 'user_id', type: 'varchar', length: 36 })
   userId: string;
 
@@ -23,6 +26,6 @@ export class PrivacyAuditEntity {
   @Column({ type: 'simple-json' })
   detail: Record<string, unknown>;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: TIMESTAMP })
   at: Date;
 }

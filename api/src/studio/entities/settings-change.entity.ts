@@ -1,4 +1,6 @@
-import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, ForeignKey, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { User } from '../../users/entities/user.entity.js';
+import { TIMESTAMP } from '../../database/portable-schema.js';
 
 /** One saved change of the studio settings: who, when, and which fields changed. */
 @Entity({ name: 'settings_changes' })
@@ -7,10 +9,12 @@ export class SettingsChangeEntity {
   @PrimaryGeneratedColumn({ type: 'integer' })
   id: number;
 
+  @ForeignKey(() => User, { onDelete: 'RESTRICT' })
   @Column({ name: 'changed_by_id', type: 'varchar', length: 36 })
   changedById: string;
 
-  @Column({ name: 'changed_at', type: 'datetime' })
+  @Index('IDX_settings_changes_at')
+  @Column({ name: 'changed_at', type: TIMESTAMP })
   changedAt: Date;
 
   /** The names of the settings fields whose value changed. */
