@@ -29,6 +29,24 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       }),
     },
     {
+      path: paths.forgotPassword.path,
+      loader: guestOnlyLoader(queryClient),
+      errorElement: <ErrorPage />,
+      hydrateFallbackElement: <PageLoader />,
+      lazy: async () => ({
+        Component: (await import('./routes/forgot-password')).ForgotPasswordRoute,
+      }),
+    },
+    {
+      // Open to anyone with the link, signed in or not: the new password ends every session.
+      path: paths.resetPassword.path,
+      errorElement: <ErrorPage />,
+      hydrateFallbackElement: <PageLoader />,
+      lazy: async () => ({
+        Component: (await import('./routes/reset-password')).ResetPasswordRoute,
+      }),
+    },
+    {
       path: paths.today.path,
       element: <Layout />,
       loader: requireTeamMemberLoader(queryClient),

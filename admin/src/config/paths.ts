@@ -80,6 +80,9 @@ export const paths = {
   insights: { path: '/insights', getHref: () => '/insights' },
   settings: { path: '/studio/settings', getHref: () => '/studio/settings' },
   acceptInvitation: { path: '/accept-invitation', getHref: () => '/accept-invitation' },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  /** The link in the reset e-mail (the API builds it): `/reset-password?token=…`. */
+  resetPassword: { path: '/reset-password', getHref: () => '/reset-password' },
   signIn: {
     path: '/sign-in',
     getHref: (redirectTo?: string | null) => {

@@ -1,5 +1,5 @@
-import { Box, Card, Container, Flex, Heading, Stack, Text } from '@chakra-ui/react';
-import { useNavigate, useSearchParams } from 'react-router';
+import { Box, Card, Container, Flex, Heading, Link, Stack, Text } from '@chakra-ui/react';
+import { Link as RouterLink, useNavigate, useSearchParams } from 'react-router';
 import { PageTitle } from '../../components/ui/page-title';
 import { Wordmark } from '../../components/ui/wordmark';
 import { paths, safeRedirect } from '../../config/paths';
@@ -31,6 +31,11 @@ export function SignInRoute() {
               <SignInForm
                 onSignedIn={() => navigate(redirectTo ?? paths.today.getHref(), { replace: true })}
               />
+              <Text textStyle="sm" mt="-2">
+                <Link asChild color="fg" textDecoration="underline" textUnderlineOffset="3px">
+                  <RouterLink to={paths.forgotPassword.getHref()}>Forgot your password?</RouterLink>
+                </Link>
+              </Text>
               <Text textStyle="sm" color="fg.muted">
                 No account yet? Team accounts are created by the chef — ask them for an invitation.
                 Clients book on the storefront.
