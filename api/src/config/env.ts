@@ -100,6 +100,12 @@ export class Env {
   @Min(1)
   AUTH_THROTTLE_LIMIT = 10;
 
+  /** Password-reset e-mails asked for, per 15 minutes per address (each account also gets at most 3 an hour). */
+  @Transform(toInt)
+  @IsInt()
+  @Min(1)
+  PASSWORD_RESET_THROTTLE_LIMIT = 5;
+
   /** Token refreshes per minute per address (every page load of either app makes one). */
   @Transform(toInt)
   @IsInt()
