@@ -33,6 +33,9 @@ for (const [path, heading] of [
   ['/how-booking-works', /./],
   ['/sign-in', /Sign in/],
   ['/create-account', /./],
+  ['/forgot-password', /Forgot your password/],
+  [`/reset-password?token=${'A'.repeat(43)}`, /Choose a new password/],
+  ['/reset-password?token=cut', /This link cannot be used/],
   ['/no-such-page', /./],
 ] as const) {
   test(`storefront ${path} has no serious or critical accessibility violations`, async ({
@@ -155,6 +158,27 @@ test('admin Accept invitation has no serious or critical accessibility violation
     page.getByRole('heading', { level: 1, name: 'This invitation cannot be used' }),
   ).toBeVisible();
   await audit(page, 'admin accept invitation, bad link');
+});
+
+test('admin Forgot your password and Choose a new password have no serious or critical accessibility violations', async ({
+  page,
+}) => {
+  await page.goto(`${urls.admin}/forgot-password`);
+  await expect(page.getByRole('heading', { level: 1, name: 'Forgot your password?' })).toBeVisible({
+    timeout: 60_000,
+  });
+  await audit(page, 'admin forgot password');
+  // A token of the right shape shows the form; a cut one shows the explanation.
+  await page.goto(`${urls.admin}/reset-password?token=${'A'.repeat(43)}`);
+  await expect(
+    page.getByRole('heading', { level: 1, name: 'Choose a new password' }),
+  ).toBeVisible();
+  await audit(page, 'admin reset password');
+  await page.goto(`${urls.admin}/reset-password?token=cut`);
+  await expect(
+    page.getByRole('heading', { level: 1, name: 'This link cannot be used' }),
+  ).toBeVisible();
+  await audit(page, 'admin reset password, bad link');
 });
 
 test('admin Orders and Calendar pages have no serious or critical accessibility violations', async ({

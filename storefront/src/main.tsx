@@ -1,17 +1,9 @@
-import { StrictMode } from 'react';
-import { createRoot } from 'react-dom/client';
-import { AppProvider } from './app/provider';
-import { AppRouter } from './app/router';
-import { createQueryClient } from './lib/query-client';
+// First: starts loading this address's screen while the rest of the entry is being set up.
+import './app/first-screen';
+import { startApp } from './app/start-app';
 
-const queryClient = createQueryClient();
 const root = document.getElementById('root');
 if (!root) throw new Error('The page has no #root element.');
 
-createRoot(root).render(
-  <StrictMode>
-    <AppProvider queryClient={queryClient}>
-      <AppRouter queryClient={queryClient} />
-    </AppProvider>
-  </StrictMode>,
-);
+// Not a top-level await: the screens' chunks import this one, which must finish evaluating first.
+void startApp(root);

@@ -1,5 +1,5 @@
 import type { QueryClient, FetchQueryOptions, QueryKey } from '@tanstack/react-query';
-import { data, type ShouldRevalidateFunction } from 'react-router';
+import { data } from 'react-router';
 import { paths } from '../config/paths';
 import { ApiError } from '../lib/api-client';
 
@@ -33,20 +33,3 @@ export const MENU_NOT_FOUND: NotFoundData = {
   message: 'It may have been withdrawn for the season, or the address may be mistyped.',
   back: { href: paths.menus.getHref(), label: 'See the menus' },
 };
-
-export const EVENT_NOT_FOUND: NotFoundData = {
-  title: 'We cannot find this event',
-  message:
-    'It is not among the events booked with this account. If you booked with another e-mail address, sign in with that one.',
-  back: { href: paths.myEvents.getHref(), label: 'Back to My events' },
-};
-
-/**
- * For screens whose address changes within the page (a tab, a month): their data is already
- * in the cache and the screen asks for what it needs, so the loader need not run again.
- */
-export const keepOnSearchChange: ShouldRevalidateFunction = ({
-  currentUrl,
-  nextUrl,
-  defaultShouldRevalidate,
-}) => (currentUrl.pathname === nextUrl.pathname ? false : defaultShouldRevalidate);

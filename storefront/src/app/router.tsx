@@ -1,30 +1,45 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
-import { createBrowserRouter, Navigate, RouterProvider, type RouteObject } from 'react-router';
+import { Navigate, type RouteObject } from 'react-router';
 import { PageLoader } from '../components/ui/page-loader';
 import { paths } from '../config/paths';
+import { homeScreen, menusScreen, screenRecipes } from './first-screen';
 import { guestOnlyLoader, requireUserLoader } from './guards';
 import { ErrorPage } from './routes/error-page';
 import { Layout } from './routes/layout';
+import {
+  homeLoader,
+  layoutLoader,
+  menuDetailLoader,
+  menusLoader,
+  type ScreenLoaderOptions,
+} from './screen-loaders';
 
 /**
  * Every screen is its own chunk, fetched on first visit; the layout and the error page are
- * in the entry so that a failed chunk still has somewhere to land.
+ * in the entry so that a failed chunk still has somewhere to land. The loaders of the screens a
+ * visit usually starts on are in the entry too, so that their data and their code load together.
  */
-export function createRoutes(queryClient: QueryClient): RouteObject[] {
-  return [
+export function createRoutes(
+  queryClient: QueryClient,
+  options: ScreenLoaderOptions = {},
+): RouteObject[] {
+  return withScreenRecipes([
     {
       path: paths.home.path,
       element: <Layout />,
       errorElement: <ErrorPage />,
       hydrateFallbackElement: <PageLoader />,
+      loader: layoutLoader(queryClient, options),
+      // The studio's card is asked for once; the screens keep it fresh.
+      shouldRevalidate: () => false,
       children: [
         {
           errorElement: <ErrorPage />,
           children: [
             {
               index: true,
-              lazy: async () => ({ Component: (await import('./routes/home')).HomeRoute }),
+              loader: homeLoader(queryClient, options),
+              lazy: async () => ({ Component: (await homeScreen()).HomeRoute }),
             },
             {
               path: paths.howBookingWorks.path,
@@ -34,17 +49,15 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             },
             {
               path: paths.menus.path,
-              lazy: async () => {
-                const m = await import('./routes/menus');
-                return { Component: m.MenusRoute, loader: m.menusLoader(queryClient) };
-              },
+              loader: menusLoader(queryClient, options),
+              lazy: async () => ({ Component: (await menusScreen()).MenusRoute }),
             },
             {
               path: paths.menu.path,
-              lazy: async () => {
-                const m = await import('./routes/menu-detail');
-                return { Component: m.MenuDetailRoute, loader: m.menuDetailLoader(queryClient) };
-              },
+              loader: menuDetailLoader(queryClient),
+              lazy: async () => ({
+                Component: (await import('./routes/menu-detail')).MenuDetailRoute,
+              }),
             },
             {
               path: paths.dates.path,
@@ -141,6 +154,20 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               }),
             },
             {
+              path: paths.forgotPassword.path,
+              loader: guestOnlyLoader(queryClient),
+              lazy: async () => ({
+                Component: (await import('./routes/forgot-password')).ForgotPasswordRoute,
+              }),
+            },
+            {
+              // Open to anyone with the link, signed in or not: the new password ends every session.
+              path: paths.resetPassword.path,
+              lazy: async () => ({
+                Component: (await import('./routes/reset-password')).ResetPasswordRoute,
+              }),
+            },
+            {
               path: '*',
               lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
             },
@@ -148,10 +175,26 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         },
       ],
     },
-  ];
+  ]);
 }
 
-export function AppRouter({ queryClient }: { queryClient: QueryClient }) {
-  const [router] = useState(() => createBrowserRouter(createRoutes(queryClient)));
-  return <RouterProvider router={router} />;
+/**
+ * Every screen's `lazy` also loads the recipes of the screens' components (theme/screen-recipes),
+ * in parallel with the screen's own code, so that they are never startup JavaScript and are in
+ * place before any screen renders.
+ */
+function withScreenRecipes(routes: RouteObject[]): RouteObject[] {
+  return routes.map((route) => {
+    const { lazy, children } = route;
+    const withRecipes = typeof lazy === 'function' ? { lazy: loadingScreenRecipes(lazy) } : {};
+    return {
+      ...route,
+      ...withRecipes,
+      ...(children ? { children: withScreenRecipes(children) } : {}),
+    } as RouteObject;
+  });
+}
+
+function loadingScreenRecipes<T>(lazy: () => Promise<T>): () => Promise<T> {
+  return async () => (await Promise.all([lazy(), screenRecipes()]))[0];
 }

@@ -62,6 +62,9 @@ export const paths = {
     path: '/create-account',
     getHref: (redirectTo?: string | null) => withRedirect('/create-account', redirectTo),
   },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  /** The link in the reset e-mail (the API builds it): `/reset-password?token=…`. */
+  resetPassword: { path: '/reset-password', getHref: () => '/reset-password' },
 } as const;
 
 function withRedirect(path: string, redirectTo?: string | null): string {

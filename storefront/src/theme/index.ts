@@ -1,106 +1,120 @@
 import { createSystem, defaultBaseConfig, defineConfig } from '@chakra-ui/react';
+// Chakra's theme, from the modules it is made of rather than its index: the index gathers every
+// token into one object, so importing anything from it ships all ten of Chakra's default colour
+// palettes (measured: 3.8 KiB gzip of startup JavaScript, and about 400 more CSS variables built
+// at startup and sent in the build-time HTML). Nappe paints with its own palettes (shared/brand).
+// `@chakra-ui/react/theme/…` is resolved to those modules by vite.config.ts and tsconfig.json.
+import { breakpoints } from '@chakra-ui/react/theme/breakpoints';
+import { globalCss as chakraGlobalCss } from '@chakra-ui/react/theme/global-css';
+import { layerStyles } from '@chakra-ui/react/theme/layer-styles';
+import { buttonRecipe as chakraButton } from '@chakra-ui/react/theme/recipes/button';
+import { containerRecipe } from '@chakra-ui/react/theme/recipes/container';
+import { headingRecipe as chakraHeading } from '@chakra-ui/react/theme/recipes/heading';
+import { iconRecipe } from '@chakra-ui/react/theme/recipes/icon';
+import { linkRecipe } from '@chakra-ui/react/theme/recipes/link';
+import { skipNavLinkRecipe } from '@chakra-ui/react/theme/recipes/skip-nav-link';
+import { spinnerRecipe } from '@chakra-ui/react/theme/recipes/spinner';
+import { semanticRadii } from '@chakra-ui/react/theme/semantic-tokens/radii';
+import { semanticShadows } from '@chakra-ui/react/theme/semantic-tokens/shadows';
+import { textStyles } from '@chakra-ui/react/theme/text-styles';
+import { animations } from '@chakra-ui/react/theme/tokens/animations';
+import { aspectRatios } from '@chakra-ui/react/theme/tokens/aspect-ratios';
+import { blurs } from '@chakra-ui/react/theme/tokens/blurs';
+import { borders } from '@chakra-ui/react/theme/tokens/borders';
+import { cursor } from '@chakra-ui/react/theme/tokens/cursor';
+import { durations } from '@chakra-ui/react/theme/tokens/durations';
+import { easings } from '@chakra-ui/react/theme/tokens/easings';
+import { fontSizes } from '@chakra-ui/react/theme/tokens/font-sizes';
+import { fontWeights } from '@chakra-ui/react/theme/tokens/font-weights';
+import { fonts } from '@chakra-ui/react/theme/tokens/fonts';
+import { keyframes } from '@chakra-ui/react/theme/tokens/keyframes';
+import { letterSpacings } from '@chakra-ui/react/theme/tokens/letter-spacing';
+import { lineHeights } from '@chakra-ui/react/theme/tokens/line-heights';
+import { radii } from '@chakra-ui/react/theme/tokens/radius';
+import { sizes } from '@chakra-ui/react/theme/tokens/sizes';
+import { spacing } from '@chakra-ui/react/theme/tokens/spacing';
+import { zIndices } from '@chakra-ui/react/theme/tokens/z-indices';
 import { semanticTokens, tokens } from '@nappe/shared/brand';
-import {
-  alertSlotRecipe as chakraAlert,
-  animationStyles,
-  breakpoints,
-  buttonRecipe as chakraButton,
-  cardSlotRecipe,
-  checkboxSlotRecipe,
-  containerRecipe,
-  cssVarsPrefix,
-  cssVarsRoot,
-  dialogSlotRecipe,
-  emptyStateSlotRecipe,
-  fieldSlotRecipe,
-  globalCss as chakraGlobalCss,
-  headingRecipe as chakraHeading,
-  iconRecipe,
-  inputAddonRecipe,
-  inputRecipe as chakraInput,
-  keyframes,
-  layerStyles,
-  linkRecipe,
-  listSlotRecipe,
-  nativeSelectSlotRecipe as chakraNativeSelect,
-  radioCardSlotRecipe,
-  semanticTokens as chakraSemanticTokens,
-  separatorRecipe,
-  skeletonRecipe,
-  skipNavLinkRecipe,
-  spinnerRecipe,
-  tableSlotRecipe,
-  tabsSlotRecipe,
-  textareaRecipe as chakraTextarea,
-  textStyles,
-  timelineSlotRecipe,
-  tokens as chakraTokens,
-} from '@chakra-ui/react/theme';
 import '@fontsource/inter/400.css';
 import '@fontsource/inter/500.css';
 import '@fontsource/inter/600.css';
 import '@fontsource/playfair-display/400.css';
 import '@fontsource/playfair-display/700.css';
-import { alertSlotRecipe } from './recipes/alert';
+import './fallback-fonts.css';
 import { buttonRecipe } from './recipes/button';
 import { headingRecipe } from './recipes/heading';
-import { inputRecipe } from './recipes/input';
-import { nativeSelectSlotRecipe } from './recipes/native-select';
-import { textareaRecipe } from './recipes/textarea';
 
 /**
- * Chakra's base (utilities, conditions) plus only the recipes these screens use: the full
- * default theme carries ~80 component recipes and would put ~30 kB gzip on the first load.
- * A component whose recipe is missing renders unstyled, so add its recipe here when you use it.
- *
- * Why not hand the booking screens' recipes to their components (the `recipe` prop) from the
- * lazy chunks instead? Measured: every recipe is reachable from the entry through Chakra's theme
- * barrel, so the bundler then keeps the whole default theme in the first-load chunks (+15 KiB
- * gzip). Registered here, the booking screens' nine recipes cost about 3 KiB gzip.
+ * Chakra's base (utilities, conditions) and tokens, and the recipes of what every page shows
+ * before its screen has loaded: the header, the footer, the loading and the error page. The
+ * screens' recipes (cards, alerts, forms, dialogs, tables…) arrive with the screens' code
+ * (`screen-recipes.ts`, loaded by every route's `lazy`), so they are not startup JavaScript.
+ * A component whose recipe is in neither renders unstyled: add its recipe where it belongs.
+ * Chakra's animation styles (`animationStyle`, used by its select and popover recipes) are left
+ * out: no recipe or screen here uses them.
  */
 const chakraSlice = defineConfig({
   preflight: true,
-  cssVarsPrefix,
-  cssVarsRoot,
+  cssVarsPrefix: 'chakra',
+  cssVarsRoot: ':where(html, .chakra-theme)',
   globalCss: chakraGlobalCss,
   theme: {
     breakpoints,
     keyframes,
-    tokens: chakraTokens,
-    semanticTokens: chakraSemanticTokens,
+    tokens: {
+      aspectRatios,
+      animations,
+      blurs,
+      borders,
+      // Chakra's own colour tokens that its recipes name outside a palette; the palettes are ours.
+      colors: {
+        transparent: { value: 'transparent' },
+        current: { value: 'currentColor' },
+        black: { value: '#09090B' },
+        white: { value: '#FFFFFF' },
+      },
+      durations,
+      easings,
+      fonts,
+      fontSizes,
+      fontWeights,
+      letterSpacings,
+      lineHeights,
+      radii,
+      spacing,
+      sizes,
+      zIndex: zIndices,
+      cursor,
+    },
+    semanticTokens: { shadows: semanticShadows, radii: semanticRadii },
     textStyles,
     layerStyles,
-    animationStyles,
     recipes: {
       button: chakraButton,
       container: containerRecipe,
       heading: chakraHeading,
       icon: iconRecipe,
-      input: chakraInput,
-      inputAddon: inputAddonRecipe,
       link: linkRecipe,
-      separator: separatorRecipe,
-      skeleton: skeletonRecipe,
       skipNavLink: skipNavLinkRecipe,
       spinner: spinnerRecipe,
-      textarea: chakraTextarea,
     },
-    slotRecipes: {
-      alert: chakraAlert,
-      card: cardSlotRecipe,
-      checkbox: checkboxSlotRecipe,
-      dialog: dialogSlotRecipe,
-      emptyState: emptyStateSlotRecipe,
-      field: fieldSlotRecipe,
-      list: listSlotRecipe,
-      nativeSelect: chakraNativeSelect,
-      radioCard: radioCardSlotRecipe,
-      table: tableSlotRecipe,
-      tabs: tabsSlotRecipe,
-      timeline: timelineSlotRecipe,
-    },
+    slotRecipes: {},
   },
 });
+
+/**
+ * The brand's font stacks (shared/brand) with each shipped font's metric-matched stand-in right
+ * after it (fallback-fonts.css), used until the shipped font has loaded. index.test.ts checks
+ * that these are the brand's stacks plus the stand-ins.
+ */
+export const FONTS = {
+  heading: {
+    value: "'Playfair Display', 'Playfair Display Fallback', Georgia, 'Times New Roman', serif",
+  },
+  body: {
+    value: "Inter, 'Inter Fallback', system-ui, -apple-system, 'Segoe UI', Roboto, sans-serif",
+  },
+};
 
 const nappe = defineConfig({
   globalCss: {
@@ -112,15 +126,9 @@ const nappe = defineConfig({
     body: { bg: 'bg', color: 'fg', fontFamily: 'body', minHeight: '100dvh' },
   },
   theme: {
-    tokens,
+    tokens: { ...tokens, fonts: FONTS },
     semanticTokens,
-    recipes: {
-      button: buttonRecipe,
-      heading: headingRecipe,
-      input: inputRecipe,
-      textarea: textareaRecipe,
-    },
-    slotRecipes: { alert: alertSlotRecipe, nativeSelect: nativeSelectSlotRecipe },
+    recipes: { button: buttonRecipe, heading: headingRecipe },
   },
 });
 

@@ -30,7 +30,8 @@ import { orderQueryOptions } from '../../features/orders/api/get-order';
 import { useCheckoutReturn } from '../../features/orders/api/return-from-checkout';
 import { OrderStatusBadge } from '../../features/orders/components/order-status-badge';
 import { balanceWords } from '../../features/orders/components/order-card';
-import { longDate, money, plural } from '../../lib/format';
+import { longDate } from '../../lib/dates';
+import { money, plural } from '../../lib/format';
 import { requireUserLoader } from '../guards';
 
 export const bookedLoader = (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {

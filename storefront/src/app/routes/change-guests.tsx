@@ -18,9 +18,11 @@ import { usePreviewGuestChange } from '../../features/orders/api/preview-guest-c
 import { RequoteSummary } from '../../features/orders/components/requote-summary';
 import { ApiError } from '../../lib/api-client';
 import { browser } from '../../lib/browser';
-import { longDate, money } from '../../lib/format';
+import { longDate } from '../../lib/dates';
+import { money } from '../../lib/format';
 import { requireUserLoader } from '../guards';
-import { EVENT_NOT_FOUND, warm } from '../loaders';
+import { warm } from '../loaders';
+import { EVENT_NOT_FOUND } from '../screen-loader-parts';
 
 export const changeGuestsLoader =
   (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {

@@ -10,7 +10,8 @@ import { AvailabilityCalendar } from '../../features/booking/components/availabi
 import { isIsoMonth, localToday, monthOf } from '../../features/booking/components/month';
 import { menusQueryOptions, useMenus } from '../../features/menus/api/get-menus';
 import { MenuFacts } from '../../features/menus/components/menu-facts';
-import { keepOnSearchChange, warm } from '../loaders';
+import { warm } from '../loaders';
+import { keepOnSearchChange } from '../screen-loader-parts';
 
 /** Every menu fits one page here: a studio offers a handful. */
 const MENUS_FOR_DATES = 100;

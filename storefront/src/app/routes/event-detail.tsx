@@ -49,9 +49,11 @@ import {
 import { StatusTimeline } from '../../features/orders/components/status-timeline';
 import { ApiError } from '../../lib/api-client';
 import { browser } from '../../lib/browser';
-import { dateTime, longDate, money, plural } from '../../lib/format';
+import { dateTime, longDate } from '../../lib/dates';
+import { money, plural } from '../../lib/format';
 import { requireUserLoader } from '../guards';
-import { EVENT_NOT_FOUND, keepOnSearchChange, warm } from '../loaders';
+import { warm } from '../loaders';
+import { EVENT_NOT_FOUND, keepOnSearchChange } from '../screen-loader-parts';
 import type { GuestsChangedState } from './change-guests';
 
 export const shouldRevalidate = keepOnSearchChange;

@@ -22,6 +22,7 @@ import {
 } from '../../components/ui/icons';
 import { PageTitle } from '../../components/ui/page-title';
 import { PlateIllustration } from '../../components/ui/plate-illustration';
+import { Skeleton } from '../../components/ui/skeleton';
 import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
@@ -29,6 +30,7 @@ import { useMenus } from '../../features/menus/api/get-menus';
 import { MenuCard } from '../../features/menus/components/menu-card';
 import { MenuGridSkeleton } from '../../features/menus/components/menu-skeletons';
 import { useStudio } from '../../features/studio/api/get-studio';
+import { FEATURED_MENUS } from '../screen-loaders';
 import type { AccountDeletedState } from './my-events';
 
 const OCCASIONS = [
@@ -127,9 +129,22 @@ export function HomeRoute() {
                 Plated desserts for the evenings that matter
               </Heading>
               <Text textStyle={{ base: 'md', md: 'lg' }} color="fg.muted" maxW="xl">
-                {withFullStop(
-                  studio.data?.tagline ??
-                    'A pastry studio that brings a finished, plated dessert to every guest at your dinner party, wedding, company dinner or private tasting',
+                {studio.isPending ? (
+                  // The chef's tagline is on its way: a placeholder about as long as a tagline,
+                  // so that the sentence after it is already where it will stay.
+                  <Skeleton
+                    as="span"
+                    display="inline-block"
+                    verticalAlign="middle"
+                    h="1em"
+                    w="16em"
+                    maxW="full"
+                  />
+                ) : (
+                  withFullStop(
+                    studio.data?.tagline ??
+                      'A pastry studio that brings a finished, plated dessert to every guest at your dinner party, wedding, company dinner or private tasting',
+                  )
                 )}{' '}
                 Every guest’s allergies reach the kitchen before anything is cooked.
               </Text>
@@ -283,7 +298,7 @@ export function HomeRoute() {
 
 /** Up to three menus, photo first; the section stays out of the way if they cannot load. */
 function FeaturedMenus() {
-  const menus = useMenus(1, 3);
+  const menus = useMenus(1, FEATURED_MENUS);
   if (menus.isError || (menus.data && menus.data.items.length === 0)) return null;
   return (
     <Container

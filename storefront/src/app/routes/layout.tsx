@@ -9,24 +9,52 @@ import {
   Stack,
   Text,
 } from '@chakra-ui/react';
-import type { ReactNode } from 'react';
-import { Link as RouterLink, NavLink, Outlet, useLocation, useNavigate } from 'react-router';
-import { NavigationProgress } from '../../components/ui/navigation-progress';
+import { lazy, Suspense, useEffect, type ReactNode } from 'react';
+import { Link as RouterLink, NavLink, Outlet, useLocation, useNavigation } from 'react-router';
 import { Wordmark } from '../../components/ui/wordmark';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
-import { useLogout } from '../../features/auth/api/logout';
 import { useStudio } from '../../features/studio/api/get-studio';
 
 export const MAIN_ID = 'main-content';
 
+// The bar along the top while the next screen loads: not needed to show the first one, so its
+// code is fetched once the page has started (Layout's effect), before any click.
+const loadNavigationProgress = async () => ({
+  default: (await import('../../components/ui/navigation-progress')).NavigationProgress,
+});
+const NavigationProgress = lazy(loadNavigationProgress);
+
+function NavigationIndicator() {
+  const navigation = useNavigation();
+  if (navigation.state === 'idle') return null;
+  return (
+    <Suspense fallback={null}>
+      <NavigationProgress />
+    </Suspense>
+  );
+}
+
+// Only someone signed in sees these (and their sign-out mutation): their code loads when needed.
+const SignedInActions = lazy(async () => ({
+  default: (await import('./signed-in-actions')).SignedInActions,
+}));
+
+/** Where the account controls go while we do not know yet who is there: same size, no jump. */
+function AccountPlaceholder() {
+  return <Box w="40" h="9" aria-hidden />;
+}
+
 export function Layout() {
+  useEffect(() => {
+    void loadNavigationProgress();
+  }, []);
   return (
     <Flex direction="column" minH="100dvh">
       <SkipNavLink id={MAIN_ID} zIndex="skipNav">
         Skip to content
       </SkipNavLink>
-      <NavigationProgress />
+      <NavigationIndicator />
       <Header />
       <Box as="main" id={MAIN_ID} tabIndex={-1} flex="1" outline="none">
         <Outlet />
@@ -106,48 +134,15 @@ function Header() {
 
 function AccountActions() {
   const me = useMe();
-  const logout = useLogout();
-  const navigate = useNavigate();
   const location = useLocation();
 
-  if (me.isPending) return <Box w="40" h="9" aria-hidden />;
+  if (me.isPending) return <AccountPlaceholder />;
 
   if (me.data) {
     return (
-      <HStack gap="3">
-        <Text
-          textStyle="sm"
-          color="fg.muted"
-          display={{ base: 'none', sm: 'block' }}
-          maxW="48"
-          truncate
-        >
-          Signed in as{' '}
-          <Text as="span" color="fg" fontWeight="medium">
-            {me.data.name}
-          </Text>
-        </Text>
-        <Button
-          size="sm"
-          variant="outline"
-          loading={logout.isPending}
-          loadingText="Signing out…"
-          onClick={async () => {
-            // Leave any private page first, so it is not asked to redirect to Sign in.
-            await navigate(paths.home.getHref());
-            // A booking in progress (with its guests' allergies) must not outlive the person
-            // in this tab: it lives in sessionStorage only, so forget it with the session.
-            try {
-              window.sessionStorage.clear();
-            } catch {
-              // Storage switched off: there is nothing kept to forget.
-            }
-            logout.mutate();
-          }}
-        >
-          Sign out
-        </Button>
-      </HStack>
+      <Suspense fallback={<AccountPlaceholder />}>
+        <SignedInActions name={me.data.name} />
+      </Suspense>
     );
   }
 

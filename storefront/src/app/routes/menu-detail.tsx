@@ -1,26 +1,17 @@
 import { Box, Button, Container, Grid, Heading, HStack, Stack, Text } from '@chakra-ui/react';
-import type { QueryClient } from '@tanstack/react-query';
-import { Link as RouterLink, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link as RouterLink, useParams } from 'react-router';
 import { ArrowLeftIcon } from '../../components/ui/booking-icons';
 import { PageTitle } from '../../components/ui/page-title';
 import { Photo } from '../../components/ui/photo';
 import { LoadError } from '../../components/ui/query-state';
 import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
-import { menuQueryOptions, useMenu } from '../../features/menus/api/get-menu';
+import { useMenu } from '../../features/menus/api/get-menu';
 import { AllergenDeclaration } from '../../features/menus/components/allergen-declaration';
 import { DessertSection } from '../../features/menus/components/dessert-section';
 import { DietaryFlags } from '../../features/menus/components/dietary-flags';
 import { MenuFacts } from '../../features/menus/components/menu-facts';
 import { MenuDetailSkeleton } from '../../features/menus/components/menu-skeletons';
-import { MENU_NOT_FOUND, warm } from '../loaders';
-
-export const menuDetailLoader =
-  (queryClient: QueryClient) =>
-  async ({ params }: LoaderFunctionArgs) => {
-    await warm(queryClient, menuQueryOptions(params.menuId ?? ''), MENU_NOT_FOUND);
-    return null;
-  };
 
 export function MenuDetailRoute() {
   const { menuId = '' } = useParams();

@@ -9,25 +9,15 @@ import {
   Text,
   VStack,
 } from '@chakra-ui/react';
-import type { QueryClient } from '@tanstack/react-query';
-import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Link as RouterLink, useSearchParams } from 'react-router';
 import { PlateIcon } from '../../components/ui/icons';
 import { PageTitle } from '../../components/ui/page-title';
 import { LoadError } from '../../components/ui/query-state';
 import { paths } from '../../config/paths';
-import { menusQueryOptions, useMenus } from '../../features/menus/api/get-menus';
+import { useMenus } from '../../features/menus/api/get-menus';
 import { MenuCard } from '../../features/menus/components/menu-card';
 import { MenuGridSkeleton } from '../../features/menus/components/menu-skeletons';
 import { pageCount, pageFromSearch } from '../../lib/page';
-import { warm } from '../loaders';
-
-export const menusLoader =
-  (queryClient: QueryClient) =>
-  async ({ request }: LoaderFunctionArgs) => {
-    const page = pageFromSearch(new URL(request.url).searchParams.get('page'));
-    await warm(queryClient, menusQueryOptions(page));
-    return null;
-  };
 
 export function MenusRoute() {
   const [searchParams] = useSearchParams();

@@ -1,5 +1,5 @@
 import { screen, within } from '@testing-library/react';
-import { http, HttpResponse } from 'msw';
+import { delay, http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
 import { studioCard } from '../../testing/fixtures';
 import { renderApp } from '../../testing/render-app';
@@ -29,6 +29,21 @@ describe('public pages', () => {
     ).toHaveAttribute('href', '/book/menu-orchard/event');
   });
 
+  it('Home keeps the tagline’s place while the studio card loads, so nothing below it moves', async () => {
+    // Core Web Vitals, CLS (web.dev): content that replaces a placeholder of another size moves
+    // what follows it. The generic line is longer than a tagline; it is only for a failed load.
+    server.use(http.get('/api/studio', () => delay('infinite')));
+    renderApp('/');
+    const hero = within(
+      await screen.findByRole('region', { name: /Plated desserts for the evenings/ }),
+    );
+    const sentence = hero.getByText(/Every guest’s allergies reach the kitchen/);
+    // A placeholder (hidden from screen readers) holds the tagline's line.
+    expect(sentence.querySelector('[aria-hidden="true"]')).not.toBeNull();
+    expect(hero.queryByText(/A pastry studio that brings/)).toBeNull();
+    expect(hero.getByText('A dessert studio')).toBeInTheDocument();
+  });
+
   it('Home still reads well when the studio card cannot be loaded', async () => {
     server.use(
       http.get('/api/studio', () =>
@@ -36,10 +51,12 @@ describe('public pages', () => {
       ),
     );
     renderApp('/');
-    expect(await screen.findByText('A dessert studio')).toBeInTheDocument();
+    // While the card is on its way the tagline is a placeholder; once the API has failed, the
+    // generic line takes its place.
     expect(
-      screen.getByText(/A pastry studio that brings a finished, plated dessert/),
+      await screen.findByText(/A pastry studio that brings a finished, plated dessert/),
     ).toBeInTheDocument();
+    expect(screen.getByText('A dessert studio')).toBeInTheDocument();
   });
 
   it('the header offers Sign in and Create account to a visitor, with a skip link', async () => {

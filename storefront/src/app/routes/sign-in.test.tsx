@@ -48,7 +48,7 @@ describe('Sign in', () => {
     expect(await screen.findByRole('heading', { name: 'My events', level: 1 })).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/my-events');
     const header = screen.getByRole('banner');
-    expect(within(header).getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
+    expect(await within(header).findByRole('button', { name: 'Sign out' })).toBeInTheDocument();
     expect(within(header).getByText(clientUser.name)).toBeInTheDocument();
   });
 

@@ -1,3 +1,4 @@
+import { Text } from '@chakra-ui/react';
 import { useNavigate, useSearchParams } from 'react-router';
 import { PageTitle } from '../../components/ui/page-title';
 import { TextLink } from '../../components/ui/text-link';
@@ -30,6 +31,9 @@ export function SignInRoute() {
         <SignInForm
           onSignedIn={() => navigate(redirectTo ?? paths.myEvents.getHref(), { replace: true })}
         />
+        <Text textStyle="sm" mt="-2">
+          <TextLink to={paths.forgotPassword.getHref()}>Forgot your password?</TextLink>
+        </Text>
       </AuthCard>
     </>
   );

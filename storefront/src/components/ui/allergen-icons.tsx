@@ -1,12 +1,5 @@
 import { Icon, type IconProps } from '@chakra-ui/react';
-import {
-  ALLERGENIC_FOODS,
-  EU_ALLERGEN_GROUPS,
-  euGroupOf,
-  usAllergenOf,
-  type AllergenicFood,
-  type EuAllergenGroup,
-} from '@nappe/shared';
+import type { EuAllergenGroup } from '@nappe/shared';
 import type { ReactNode } from 'react';
 
 /*
@@ -155,23 +148,20 @@ const DRAWINGS: Record<EuAllergenGroup | 'other', ReactNode> = {
   ),
 };
 
-const GROUPS = new Set<string>(EU_ALLERGEN_GROUPS);
-const FOODS = new Set<string>(ALLERGENIC_FOODS);
-
-/** The drawing for an EU group, a specific food (its group's drawing) or "tree_nuts". */
+/**
+ * The drawing for an EU group or "tree_nuts" (the US name of the group); anything else gets the
+ * neutral mark. A specific food ("pine_nut") is drawn as its group by allergen-food-icon.tsx,
+ * which needs the shared allergen rules: kept apart so that the menus screens load no rules.
+ */
 function drawingFor(allergen: string): ReactNode {
-  if (GROUPS.has(allergen)) return DRAWINGS[allergen as EuAllergenGroup];
   if (allergen === 'tree_nuts') return DRAWINGS.nuts;
-  if (FOODS.has(allergen)) {
-    const food = allergen as AllergenicFood;
-    const group = euGroupOf(food) ?? (usAllergenOf(food) === 'tree_nuts' ? 'nuts' : undefined);
-    if (group) return DRAWINGS[group];
-  }
-  return DRAWINGS.other;
+  return Object.hasOwn(DRAWINGS, allergen)
+    ? DRAWINGS[allergen as EuAllergenGroup | 'other']
+    : DRAWINGS.other;
 }
 
 export interface AllergenIconProps extends Omit<IconProps, 'children'> {
-  /** An EU group ("milk"), a specific food ("pine_nut") or "tree_nuts". */
+  /** An EU group ("milk") or "tree_nuts". */
   allergen: string;
 }
 

@@ -1,13 +1,8 @@
 import { createIcon } from '@chakra-ui/react';
+import { stroke } from './icon-stroke';
 
-// Line icons of our own, drawn on a 24-unit grid with a 1.75 stroke.
-const stroke = {
-  fill: 'none',
-  stroke: 'currentColor',
-  strokeWidth: 1.75,
-  strokeLinecap: 'round',
-  strokeLinejoin: 'round',
-} as const;
+// Line icons of our own, drawn on a 24-unit grid with a 1.75 stroke. The spoon of the wordmark
+// is drawn in wordmark.tsx: the header, on every page, then loads only that one.
 
 export const EyeIcon = /* @__PURE__ */ createIcon({
   displayName: 'EyeIcon',
@@ -42,20 +37,6 @@ export const EyeOffIcon = /* @__PURE__ */ createIcon({
 export const ArrowRightIcon = /* @__PURE__ */ createIcon({
   displayName: 'ArrowRightIcon',
   path: <path {...stroke} d="M4.5 12h15M13.5 6l6 6-6 6" />,
-});
-
-/** A spoon coated with a drop of custard: the "nappe" that names the product. */
-export const SpoonIcon = /* @__PURE__ */ createIcon({
-  displayName: 'SpoonIcon',
-  path: [
-    <ellipse key="a" {...stroke} cx="9" cy="8.5" rx="5" ry="6" transform="rotate(-35 9 8.5)" />,
-    <path key="b" {...stroke} d="M12.5 13l7.5 8" />,
-    <path
-      key="c"
-      fill="currentColor"
-      d="M5.4 6.2c1.6-2.3 4.6-2.8 6.4-1.2-.4 1.3-1.2 1.9-1.6 1.1-.7 1.7-1.6 1.6-1.8.6-.9 1.5-1.9 1-1.9-.1-.5.6-1.2.4-1.1-.4Z"
-    />,
-  ],
 });
 
 export const CalendarIcon = /* @__PURE__ */ createIcon({

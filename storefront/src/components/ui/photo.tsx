@@ -1,13 +1,8 @@
 import { Box, chakra, type BoxProps } from '@chakra-ui/react';
+import { GRID_PHOTO_SIZES, photoSrcSet, type PhotoSource } from './photo-source';
 import { PlateIllustration } from './plate-illustration';
 
-/** A photo as the API serves it: a large and a thumbnail WebP, with the large one's pixel size. */
-export interface PhotoSource {
-  url: string;
-  thumbnailUrl: string;
-  width: number;
-  height: number;
-}
+export type { PhotoSource } from './photo-source';
 
 const Img = chakra('img');
 
@@ -20,7 +15,7 @@ export function Photo({
   photo,
   alt,
   priority = false,
-  sizes = '(min-width: 62em) 33vw, (min-width: 30em) 50vw, 100vw',
+  sizes = GRID_PHOTO_SIZES,
   aspectRatio = 4 / 3,
   ...frame
 }: {
@@ -42,7 +37,7 @@ export function Photo({
       {photo ? (
         <Img
           src={photo.url}
-          srcSet={`${photo.thumbnailUrl} 400w, ${photo.url} ${photo.width}w`}
+          srcSet={photoSrcSet(photo)}
           sizes={sizes}
           htmlWidth={photo.width}
           htmlHeight={photo.height}

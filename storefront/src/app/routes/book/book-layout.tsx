@@ -18,7 +18,8 @@ import { useBookingDraft, type BookingDraft } from '../../../features/booking/dr
 import { eventComplete } from '../../../features/booking/draft/event-schema';
 import { menuQueryOptions, useMenu } from '../../../features/menus/api/get-menu';
 import type { PublicMenu } from '../../../features/menus/api/types';
-import { longDate, money, plural } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { money, plural } from '../../../lib/format';
 import { MENU_NOT_FOUND, warm } from '../../loaders';
 
 export interface BookingOutlet {

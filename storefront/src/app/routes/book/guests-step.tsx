@@ -13,7 +13,7 @@ import {
   type GuestFormValues,
   type GuestLimits,
 } from '../../../features/guests/form/guest-form';
-import { longDate } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
 import { useBooking } from './book-layout';
 
 /** *Your guests*: how many, and each guest's allergies and diets (typed in or from a CSV file). */

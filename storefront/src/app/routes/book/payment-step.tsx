@@ -14,7 +14,8 @@ import { orderInputFrom } from '../../../features/booking/draft/event-schema';
 import { startCheckout } from '../../../features/orders/api/start-checkout';
 import { ApiError } from '../../../lib/api-client';
 import { browser, newIdempotencyKey } from '../../../lib/browser';
-import { longDate, money } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { money } from '../../../lib/format';
 import { firstOpenStep, reachableSteps, useBooking } from './book-layout';
 
 function choices(quote: Quote): { value: PaymentChoice; title: string; text: string }[] {

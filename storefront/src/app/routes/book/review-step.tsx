@@ -29,7 +29,8 @@ import {
 import { addressLines } from '../../../features/booking/draft/event-schema';
 import { AllergenSummary } from '../../../features/guests/components/allergen-summary';
 import { ApiError } from '../../../lib/api-client';
-import { longDate, plural } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { plural } from '../../../lib/format';
 import { firstOpenStep, reachableSteps, useBooking } from './book-layout';
 
 const ACCEPT_MESSAGE =

@@ -10,7 +10,11 @@ export interface ErrorSummary {
 export function describeAuthError(
   error: unknown,
   secondsLeft: number,
-  action: 'signing in' | 'creating an account' = 'signing in',
+  action:
+    | 'signing in'
+    | 'creating an account'
+    | 'sending reset links'
+    | 'choosing a new password' = 'signing in',
 ): ErrorSummary {
   if (!(error instanceof ApiError)) {
     return { title: 'Something went wrong', messages: ['Please try again in a moment.'] };

@@ -3,7 +3,7 @@ import type { AvailabilityDay, IsoDate } from '@nappe/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { memo, useEffect, useId, useMemo } from 'react';
 import { LoadError } from '../../../components/ui/query-state';
-import { longDate } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
 import { availabilityQueryOptions, useAvailability } from '../api/get-availability';
 import { CalendarLegend, MonthCalendar } from './month-calendar';
 import { addMonths, firstDayOf, lastDayOf, localToday, monthOf, type IsoMonth } from './month';

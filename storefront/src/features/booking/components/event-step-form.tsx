@@ -5,7 +5,7 @@ import { useCallback, useEffect, useState, type ReactNode } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { ArrowRightIcon, CheckIcon } from '../../../components/ui/icons';
 import { Textarea } from '../../../components/ui/textarea';
-import { longDate } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
 import type { EventDraft } from '../draft/booking-draft';
 import { eventStepSchema } from '../draft/event-schema';
 import { AvailabilityCalendar } from './availability-calendar';

@@ -9,7 +9,8 @@ import {
   HourglassIcon,
 } from '../../../components/ui/booking-icons';
 import { CheckIcon, PlateIcon } from '../../../components/ui/icons';
-import { longDate, plural } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { plural } from '../../../lib/format';
 import {
   addMonths,
   compareMonths,

@@ -1,7 +1,8 @@
 import { Box, Flex, Heading, List, Separator, Stack, Text } from '@chakra-ui/react';
 import { formatRateBp, type Quote } from '@nappe/shared';
 import type { ReactNode } from 'react';
-import { longDate, money } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { money } from '../../../lib/format';
 
 function Row({
   label,

@@ -1,6 +1,6 @@
 import { Box, Heading, HStack, List, Stack, Text } from '@chakra-ui/react';
 import type { Diet, GuestAllergen } from '@nappe/shared';
-import { AllergenIcon } from '../../../components/ui/allergen-icons';
+import { FoodAllergenIcon } from '../../../components/ui/allergen-food-icon';
 import { plural } from '../../../lib/format';
 import { allergenLabel, dietLabel, sortAllergens, FORM_DIETS } from '../form/guest-form';
 
@@ -68,7 +68,7 @@ export function AllergenSummary({
             {allergens.map(({ allergen, guests: names }) => (
               <List.Item key={allergen} textStyle="sm">
                 <HStack gap="2" align="start">
-                  <AllergenIcon allergen={allergen} mt="0.5" color="caramel.fg" />
+                  <FoodAllergenIcon allergen={allergen} mt="0.5" color="caramel.fg" />
                   <Text>
                     <Text as="span" fontWeight="semibold">
                       {allergenLabel(allergen)}

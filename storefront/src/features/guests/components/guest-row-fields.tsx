@@ -19,7 +19,7 @@ import {
   type FieldErrors,
   type UseFormRegister,
 } from 'react-hook-form';
-import { AllergenIcon } from '../../../components/ui/allergen-icons';
+import { FoodAllergenIcon } from '../../../components/ui/allergen-food-icon';
 import { TrashIcon } from '../../../components/ui/booking-icons';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { Textarea } from '../../../components/ui/textarea';
@@ -147,7 +147,7 @@ export function GuestRowFields({
                     inputProps={{ onBlur: field.onBlur }}
                   >
                     <HStack as="span" gap="1.5">
-                      <AllergenIcon allergen={a} color="fg.muted" />
+                      <FoodAllergenIcon allergen={a} color="fg.muted" />
                       <span>{allergenLabel(a)}</span>
                     </HStack>
                   </Checkbox>

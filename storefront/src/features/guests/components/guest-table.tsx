@@ -1,6 +1,6 @@
 import { Box, HStack, List, Stack, Text } from '@chakra-ui/react';
 import type { Diet, GuestAllergen } from '@nappe/shared';
-import { AllergenIcon } from '../../../components/ui/allergen-icons';
+import { FoodAllergenIcon } from '../../../components/ui/allergen-food-icon';
 import { allergenLabel, dietLabel, sortAllergens } from '../form/guest-form';
 
 export interface GuestView {
@@ -44,7 +44,7 @@ export function GuestCards({ guests }: { guests: readonly GuestView[] }) {
                 <Stack gap="1" as="ul" listStyleType="none" aria-label={`Allergies of ${g.label}`}>
                   {sortAllergens(g.allergens as GuestAllergen[]).map((a) => (
                     <HStack as="li" key={a} gap="1.5" textStyle="sm">
-                      <AllergenIcon allergen={a} color="caramel.fg" />
+                      <FoodAllergenIcon allergen={a} color="caramel.fg" />
                       <span>{allergenLabel(a)}</span>
                     </HStack>
                   ))}

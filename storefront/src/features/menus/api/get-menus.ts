@@ -6,10 +6,15 @@ import type { PublicMenu } from './types';
 
 export const MENUS_PAGE_SIZE = 12;
 
+/** The address of a page of active menus, under the API's base path. */
+export function menusPath(page: number, pageSize = MENUS_PAGE_SIZE): string {
+  const query = new URLSearchParams({ page: String(page), pageSize: String(pageSize) });
+  return `/menus?${query.toString()}`;
+}
+
 /** The active menus, a page at a time (`GET /api/menus`, public). */
 export function getMenus(page: number, pageSize = MENUS_PAGE_SIZE): Promise<Page<PublicMenu>> {
-  const query = new URLSearchParams({ page: String(page), pageSize: String(pageSize) });
-  return api.get<Page<PublicMenu>>(`/menus?${query.toString()}`, { auth: false });
+  return api.get<Page<PublicMenu>>(menusPath(page, pageSize), { auth: false });
 }
 
 export const menusQueryOptions = (page = 1, pageSize = MENUS_PAGE_SIZE) =>

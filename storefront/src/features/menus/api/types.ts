@@ -1,4 +1,4 @@
-import type { PhotoSource } from '../../../components/ui/photo';
+import type { PhotoSource } from '../../../components/ui/photo-source';
 
 /**
  * What `GET /api/menus` and `GET /api/menus/:id` return for an active menu (the API's public

@@ -3,13 +3,14 @@ import { Link as RouterLink } from 'react-router';
 import { Photo } from '../../../components/ui/photo';
 import { paths } from '../../../config/paths';
 import type { PublicMenu } from '../api/types';
+import { cardPhoto } from './card-photo';
 import { AllergenSummaryLine } from './allergen-declaration';
 import { DietaryFlags } from './dietary-flags';
 import { MenuFacts } from './menu-facts';
 
 /** A menu in the list: its photo first, then what it is, what it costs and what it contains. */
 export function MenuCard({ menu, priority = false }: { menu: PublicMenu; priority?: boolean }) {
-  const photo = menu.photos[0] ?? menu.desserts.find((d) => d.photos.length > 0)?.photos[0];
+  const photo = cardPhoto(menu);
   const headingId = `menu-${menu.id}-name`;
   return (
     <Card.Root

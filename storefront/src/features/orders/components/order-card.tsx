@@ -4,7 +4,8 @@ import { Link as RouterLink } from 'react-router';
 import { ClockIcon } from '../../../components/ui/booking-icons';
 import { CalendarIcon, GuestsIcon } from '../../../components/ui/icons';
 import { paths } from '../../../config/paths';
-import { longDate, money, plural } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { money, plural } from '../../../lib/format';
 import { OrderStatusBadge } from './order-status-badge';
 
 /** What is still owed on an order, in words. */

@@ -1,7 +1,8 @@
 import type { OrderDetail } from '@nappe/shared';
 import { Text } from '@chakra-ui/react';
 import { Facts } from '../../../components/ui/facts';
-import { longDate, money } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { money } from '../../../lib/format';
 
 /** The order's money as the server keeps it: total, paid (net of refunds), still to pay. */
 export function OrderMoney({ order }: { order: OrderDetail }) {

@@ -1,7 +1,8 @@
 import { Button, Stack, Table, Text } from '@chakra-ui/react';
 import type { PaymentKind, PaymentRecord, PaymentRecordStatus } from '@nappe/shared';
 import { DownloadIcon } from '../../../components/ui/booking-icons';
-import { dateTime, money } from '../../../lib/format';
+import { dateTime } from '../../../lib/dates';
+import { money } from '../../../lib/format';
 import type { OrderDocument } from '../api/download-document';
 
 export const PAYMENT_KIND_LABELS: Record<PaymentKind, string> = {

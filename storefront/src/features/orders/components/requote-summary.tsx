@@ -1,7 +1,8 @@
 import { Stack, Text } from '@chakra-ui/react';
 import type { Requote } from '@nappe/shared';
 import { Facts, type Fact } from '../../../components/ui/facts';
-import { longDate, money } from '../../../lib/format';
+import { longDate } from '../../../lib/dates';
+import { money } from '../../../lib/format';
 
 /** The server's re-quote for a change of guests: what is collected or refunded now, and after. */
 export function RequoteSummary({ requote }: { requote: Requote }) {

@@ -1,6 +1,6 @@
 import { Text, Timeline } from '@chakra-ui/react';
 import type { OrderEvent } from '@nappe/shared';
-import { dateTime } from '../../../lib/format';
+import { dateTime } from '../../../lib/dates';
 
 function byWhom(actor: OrderEvent['actor']): string {
   switch (actor.role) {

@@ -15,7 +15,10 @@ export const studioKeys = {
   card: () => [...studioKeys.all, 'card'] as const,
 };
 
-export const getStudio = (): Promise<StudioCard> => api.get<StudioCard>('/studio', { auth: false });
+export const STUDIO_PATH = '/studio';
+
+export const getStudio = (): Promise<StudioCard> =>
+  api.get<StudioCard>(STUDIO_PATH, { auth: false });
 
 export const studioQueryOptions = () =>
   queryOptions({ queryKey: studioKeys.card(), queryFn: getStudio, staleTime: 10 * 60_000 });

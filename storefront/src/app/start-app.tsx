@@ -1,0 +1,53 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createRoot, hydrateRoot, type Root, type RootOptions } from 'react-dom/client';
+import { createBrowserRouter, type DataRouter } from 'react-router';
+import { OTHER_PAGE_ATTRIBUTE, PREBUILT_PATH_ATTRIBUTE } from '../config/prebuilt';
+import { createQueryClient } from '../lib/query-client';
+import { App, routerInitialized } from './app';
+import { createRoutes } from './router';
+
+export interface StartedApp {
+  root: Root;
+  router: DataRouter;
+  queryClient: QueryClient;
+  /** Whether React took over markup rendered at build time rather than drawing the page. */
+  hydrated: boolean;
+}
+
+/**
+ * Starts the storefront in `container`. Home and Menus arrive as HTML rendered at build time
+ * (scripts/prerender.mjs), so they show before any script has run: React then takes that
+ * markup over (hydrates it) instead of drawing the page again. Any other page starts empty.
+ */
+export async function startApp(
+  container: HTMLElement,
+  options: Pick<RootOptions, 'onRecoverableError'> = {},
+): Promise<StartedApp> {
+  let showingPrebuiltPage =
+    container.getAttribute(PREBUILT_PATH_ATTRIBUTE) === window.location.pathname;
+
+  const queryClient = createQueryClient();
+  // Made before the first render, so the screen's code and data start loading at once.
+  const router = createBrowserRouter(
+    createRoutes(queryClient, { showingPrebuiltPage: () => showingPrebuiltPage }),
+  );
+  const app = <App queryClient={queryClient} router={router} />;
+
+  if (showingPrebuiltPage) {
+    // Hydration must render what the markup shows: the screen itself, not the loading
+    // fallback, so it waits for the screen's code; the page stays readable (and its links
+    // work) meanwhile.
+    await routerInitialized(router);
+    const root = hydrateRoot(container, app, options);
+    showingPrebuiltPage = false;
+    return { root, router, queryClient, hydrated: true };
+  }
+
+  // Markup rendered for another address (see OTHER_PAGE_ATTRIBUTE) is not this page's.
+  container.replaceChildren();
+  container.removeAttribute(PREBUILT_PATH_ATTRIBUTE);
+  document.documentElement.removeAttribute(OTHER_PAGE_ATTRIBUTE);
+  const root = createRoot(container, options);
+  root.render(app);
+  return { root, router, queryClient, hydrated: false };
+}
