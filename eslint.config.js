@@ -7,7 +7,10 @@ import globals from 'globals';
 const typeAwareRules = {
   '@typescript-eslint/no-floating-promises': 'error',
   '@typescript-eslint/no-misused-promises': 'error',
-  '@typescript-eslint/switch-exhaustiveness-check': ['error', { considerDefaultExhaustiveForUnions: true }],
+  '@typescript-eslint/switch-exhaustiveness-check': [
+    'error',
+    { considerDefaultExhaustiveForUnions: true },
+  ],
   '@typescript-eslint/consistent-type-imports': 'off',
   '@typescript-eslint/no-unused-vars': [
     'error',
@@ -60,7 +63,13 @@ export default tseslint.config(
     },
   },
   {
-    files: ['docker-free-scripts/**/*.{js,mjs}', '*.js', '*.mjs', 'e2e/**/*.ts'],
+    files: [
+      'docker-free-scripts/**/*.{js,mjs}',
+      'storefront/scripts/**/*.mjs',
+      '*.js',
+      '*.mjs',
+      'e2e/**/*.ts',
+    ],
     languageOptions: { globals: globals.node },
   },
 );
