@@ -244,7 +244,7 @@ test('the chef filters the inbox, opens an order, confirms a request through the
   const payments = page.getByRole('region', { name: 'Payments and refunds' });
   const [receipt] = await Promise.all([
     page.waitForEvent('download'),
-    payments.getByRole('button', { name: /^Receipt for the deposit of .+ \(PDF\)$/ }).click(),
+    payments.getByRole('button', { name: /^PDF receipt for the deposit of .+$/ }).click(),
   ]);
   expect(receipt.suggestedFilename()).toMatch(new RegExp(`${alreadyConfirmed.reference}.*\\.pdf$`));
   const head = await new Promise<string>((resolve, reject) => {

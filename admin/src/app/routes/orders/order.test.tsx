@@ -98,7 +98,7 @@ describe('Order detail', () => {
     const { api, user } = renderOrders('/orders/ord-41', standardOrders());
     const payments = await region('Payments and refunds');
     await user.click(
-      payments.getByRole('button', { name: `Receipt for the deposit of ${DEPOSIT_18} (PDF)` }),
+      payments.getByRole('button', { name: `PDF receipt for the deposit of ${DEPOSIT_18}` }),
     );
     await waitFor(() => expect(clicks).toEqual(['receipt-N-2026-0041-deposit.pdf']));
     expect(

@@ -344,7 +344,7 @@ export function PaymentsSection({ order, timeZone }: { order: OrderDetail; timeZ
                           fallbackName={`receipt-${order.reference}.pdf`}
                           size="xs"
                           variant="ghost"
-                          aria-label={`Receipt for the ${PAYMENT_KIND_LABELS[p.kind].toLowerCase()} of ${p.kind === 'refund' ? `−${money(p.amountMinor)}` : money(p.amountMinor)} (PDF)`}
+                          aria-label={`PDF receipt for the ${PAYMENT_KIND_LABELS[p.kind].toLowerCase()} of ${p.kind === 'refund' ? `−${money(p.amountMinor)}` : money(p.amountMinor)}`}
                         >
                           PDF
                         </DownloadButton>
