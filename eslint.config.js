@@ -47,11 +47,7 @@ export default tseslint.config(
     },
   },
   {
-    files: ['web-kit/**/*.ts'],
-    languageOptions: { globals: globals.browser },
-  },
-  {
-    files: ['storefront/**/*.{ts,tsx}', 'admin/**/*.{ts,tsx}'],
+    files: ['storefront/**/*.{ts,tsx}', 'admin/**/*.{ts,tsx}', 'web-kit/**/*.{ts,tsx}'],
     plugins: { 'react-hooks': reactHooks },
     languageOptions: { globals: globals.browser },
     rules: {

@@ -7,11 +7,13 @@ import {
   recipeIngredientLabel,
   type AuthUser,
   type OrderSummary,
+  type PrepDaySchedule,
   type PrepOrderInput,
   type PrepPlan,
+  type PrepPlanView,
+  type ScheduledTask,
 } from '@nappe/shared';
 import { http, HttpResponse } from 'msw';
-import type { PrepDaySchedule, PrepPlanView, ScheduledTask } from '../features/prep/api/types';
 import { studioCard } from './fixtures';
 
 /**

@@ -1,11 +1,10 @@
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiQuery, ApiTags } from '@nestjs/swagger';
-import { Role } from '@nappe/shared';
+import { Role, type AllergyCounts } from '@nappe/shared';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { allergyCountsQuerySchema } from './allergy-notes.dto.js';
 import { AllergyNotesService } from './allergy-notes.service.js';
-import type { AllergyCounts } from './allergy-notes.types.js';
 
 /**
  * `GET /api/allergy-notes/counts?orderIds=a,b,c` (chef, staff): for the Allergy notes list, how

@@ -10,14 +10,19 @@ import {
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiGoneResponse, ApiTags } from '@nestjs/swagger';
 import { GUEST_DETAILS_GONE } from '../privacy/guest-retention.js';
-import { Role } from '@nappe/shared';
+import {
+  Role,
+  type AccessLogEntry,
+  type AllergyNotes,
+  type Briefing,
+  type GuestNote,
+} from '@nappe/shared';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import type { Principal } from '../auth/principal.js';
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { substitutionBodySchema, type SubstitutionBody } from './allergy-notes.dto.js';
 import { AllergyNotesService } from './allergy-notes.service.js';
-import type { AccessLogEntry, AllergyNotes, Briefing, GuestNote } from './allergy-notes.types.js';
 
 /**
  * Allergy notes of an order: the client who entered the guests, the chef and staff read them;

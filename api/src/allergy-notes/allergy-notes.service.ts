@@ -12,9 +12,15 @@ import {
   isKitchenError,
   OrderStatus,
   Role,
+  type AccessLogEntry,
+  type AllergyCounts,
+  type AllergyNotes,
+  type Briefing,
   type GuestDataView,
+  type GuestNote,
   type PrepConflict,
   type Substitution,
+  type UnresolvedConflict,
 } from '@nappe/shared';
 import { DataSource, In, type EntityManager } from 'typeorm';
 import type { Principal } from '../auth/principal.js';
@@ -31,14 +37,6 @@ import { loadStudio } from '../studio/booking-settings.js';
 import { StudioSettings } from '../studio/entities/studio-settings.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import type { SubstitutionBody } from './allergy-notes.dto.js';
-import type {
-  AccessLogEntry,
-  AllergyCounts,
-  AllergyNotes,
-  Briefing,
-  GuestNote,
-  UnresolvedConflict,
-} from './allergy-notes.types.js';
 import { renderBriefingPdf } from './briefing-pdf.js';
 import { GuestDataAccessEntity } from './entities/guest-data-access.entity.js';
 import { OrderSubstitutionEntity } from './entities/order-substitution.entity.js';

@@ -1,6 +1,5 @@
-import { formatIsoDate } from '@nappe/shared';
+import { formatIsoDate, type Briefing } from '@nappe/shared';
 import PDFDocument from 'pdfkit';
-import type { Briefing } from './allergy-notes.types.js';
 
 const INK = '#2B1E2F';
 const MUTED = '#6B5E6E';

@@ -1,21 +1,19 @@
 import {
   checkGuestAgainstDessert,
+  type AllergyNotes,
+  type Briefing,
+  type BriefingTable,
+  type GuestNote,
   type GuestRequirement,
   type GuestPlateChange,
   type KitchenIndex,
   type PrepOrderInput,
+  type RecordedSubstitution,
   type Substitution,
+  type UnresolvedConflict,
 } from '@nappe/shared';
 import type { OrderGuestEntity } from '../orders/entities/order-guest.entity.js';
 import type { OrderEntity } from '../orders/entities/order.entity.js';
-import type {
-  AllergyNotes,
-  Briefing,
-  BriefingTable,
-  GuestNote,
-  RecordedSubstitution,
-  UnresolvedConflict,
-} from './allergy-notes.types.js';
 import type { OrderSubstitutionEntity } from './entities/order-substitution.entity.js';
 
 /** A stored guest row as the shared conflict check reads it. */

@@ -27,13 +27,13 @@ import {
   type OrderDetail,
   type OrderReasonRequest,
   type OrderSummary,
+  type Page,
 } from '@nappe/shared';
 import type { Response } from 'express';
 import { confirmBodySchema, type ConfirmBody } from '../allergy-notes/allergy-notes.dto.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import type { Principal } from '../auth/principal.js';
-import type { Page } from '../common/page.js';
 import { ZodValidationPipe } from '../common/zod-validation.pipe.js';
 import { CheckoutService } from '../payments/checkout.service.js';
 import {

@@ -37,6 +37,7 @@ import {
   type GuestRequirement,
   type OrderDetail,
   type OrderSummary,
+  type Page,
   type Quote,
   type RefundResult,
 } from '@nappe/shared';
@@ -44,7 +45,6 @@ import { DataSource, In, QueryFailedError, type EntityManager } from 'typeorm';
 import { AllergyNotesService } from '../allergy-notes/allergy-notes.service.js';
 import type { Principal } from '../auth/principal.js';
 import { likePattern } from '../kitchen/catalogue/kitchen-catalogue.service.js';
-import type { Page } from '../common/page.js';
 import { Env } from '../config/env.js';
 import { DocumentsService, type RenderedDocument } from '../documents/documents.service.js';
 import { CheckoutService } from '../payments/checkout.service.js';

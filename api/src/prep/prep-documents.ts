@@ -1,4 +1,4 @@
-import { formatMoney, type PrepPlan } from '@nappe/shared';
+import { formatMoney, type PrepPlanView } from '@nappe/shared';
 import PDFDocument from 'pdfkit';
 import type { ComponentLabel } from './prep.types.js';
 
@@ -14,9 +14,9 @@ const row = (values: Array<string | number>) => values.map(cell).join(',');
 
 /**
  * The plan as CSV (RFC 4180 quoting): the Prep sheet (one row per recipe run and production day)
- * then the Purchase list. Cost columns only when `withCosts`.
+ * then the Purchase list. Cost columns only when `withCosts`: the chef's plan, which carries them.
  */
-export function planCsv(plan: PrepPlan, withCosts: boolean): string {
+export function planCsv(plan: PrepPlanView, withCosts: boolean): string {
   const lines = [
     row(['Prep sheet', `${plan.range.from} to ${plan.range.to}`, `spare ${plan.sparePercent} %`]),
     row([
@@ -75,9 +75,9 @@ export function planCsv(plan: PrepPlan, withCosts: boolean): string {
         l.packs,
         ...(withCosts
           ? [
-              formatMoney(l.packPriceMinor, plan.currency),
-              formatMoney(l.totalMinor, plan.currency),
-              formatMoney(l.usedCostMinor, plan.currency),
+              formatMoney(l.packPriceMinor!, plan.currency),
+              formatMoney(l.totalMinor!, plan.currency),
+              formatMoney(l.usedCostMinor!, plan.currency),
             ]
           : []),
       ]),
@@ -85,7 +85,7 @@ export function planCsv(plan: PrepPlan, withCosts: boolean): string {
   }
   if (withCosts) {
     lines.push(
-      row(['Total', '', '', '', '', '', formatMoney(plan.purchaseList.totalMinor, plan.currency)]),
+      row(['Total', '', '', '', '', '', formatMoney(plan.purchaseList.totalMinor!, plan.currency)]),
     );
   }
   return `${lines.join('\r\n')}\r\n`;
@@ -118,8 +118,8 @@ function pdf(title: string, draw: (doc: PDFKit.PDFDocument) => void): Promise<Bu
   return done;
 }
 
-/** Prep sheet and Purchase list as one PDF, rendered on request. */
-export function renderPlanPdf(plan: PrepPlan, withCosts: boolean): Promise<Buffer> {
+/** Prep sheet and Purchase list as one PDF, rendered on request (costs as in `planCsv`). */
+export function renderPlanPdf(plan: PrepPlanView, withCosts: boolean): Promise<Buffer> {
   return pdf(`Prep sheet ${plan.range.from} to ${plan.range.to}`, (doc) => {
     const t = winAnsi;
     doc.fillColor(INK).font('Helvetica-Bold').fontSize(18).text('Prep sheet');
@@ -150,7 +150,7 @@ export function renderPlanPdf(plan: PrepPlan, withCosts: boolean): Promise<Buffe
     for (const l of plan.purchaseList.lines) {
       doc.text(
         t(
-          `${l.name}: ${l.neededGrams} g needed; ${l.packs} × ${l.packSize} ${l.packUnit}${withCosts ? ` = ${formatMoney(l.totalMinor, plan.currency)}` : ''}`,
+          `${l.name}: ${l.neededGrams} g needed; ${l.packs} × ${l.packSize} ${l.packUnit}${withCosts ? ` = ${formatMoney(l.totalMinor!, plan.currency)}` : ''}`,
         ),
       );
     }
@@ -158,7 +158,7 @@ export function renderPlanPdf(plan: PrepPlan, withCosts: boolean): Promise<Buffe
       doc
         .moveDown(0.5)
         .font('Helvetica-Bold')
-        .text(t(`Total: ${formatMoney(plan.purchaseList.totalMinor, plan.currency)}`));
+        .text(t(`Total: ${formatMoney(plan.purchaseList.totalMinor!, plan.currency)}`));
     }
   });
 }

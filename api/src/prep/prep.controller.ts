@@ -10,13 +10,12 @@ import {
   StreamableFile,
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Role } from '@nappe/shared';
+import { Role, type PrepDaySchedule, type PrepPlanView, type ScheduledTask } from '@nappe/shared';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import type { Principal } from '../auth/principal.js';
 import { planCsv, renderLabelsPdf, renderPlanPdf } from './prep-documents.js';
 import { PrepService } from './prep.service.js';
-import type { PrepDaySchedule, PrepPlanView, ScheduledTask } from './prep.types.js';
 
 const text = (q: unknown): string | undefined =>
   typeof q === 'string' && q !== '' ? q : undefined;

@@ -8,7 +8,10 @@ import {
   planPrep,
   recipeIngredientLabel,
   Role,
+  type PrepDaySchedule,
   type PrepPlan,
+  type PrepPlanView,
+  type ScheduledTask,
 } from '@nappe/shared';
 import { Between, DataSource, In, type EntityManager } from 'typeorm';
 import { prepOrderOf } from '../allergy-notes/order-allergy-notes.js';
@@ -27,7 +30,7 @@ import { keptPlateChanges } from '../privacy/guest-retention.js';
 import { loadStudio } from '../studio/booking-settings.js';
 import { PrepTaskTickEntity } from './entities/prep-task-tick.entity.js';
 import { dateOfTaskKey, prepTaskKeys } from './prep-task-key.js';
-import type { ComponentLabel, PrepDaySchedule, PrepPlanView, ScheduledTask } from './prep.types.js';
+import type { ComponentLabel } from './prep.types.js';
 
 /** How far ahead of a production day the schedule looks for events it prepares. */
 export const SCHEDULE_HORIZON_DAYS = 21;
@@ -38,15 +41,14 @@ function badDate(what: string): BadRequestException {
 }
 
 /** Removes what a plan costs: the chef's figures only. */
-function withoutCosts(plan: PrepPlan): PrepPlan {
+function withoutCosts(plan: PrepPlan): Omit<PrepPlanView, 'costsShown'> {
   return {
     ...plan,
     purchaseList: {
       lines: plan.purchaseList.lines.map(
-        ({ packPriceMinor: _p, totalMinor: _t, usedCostMinor: _u, ...line }) =>
-          line as (typeof plan.purchaseList.lines)[number],
+        ({ packPriceMinor: _p, totalMinor: _t, usedCostMinor: _u, ...line }) => line,
       ),
-    } as PrepPlan['purchaseList'],
+    },
   };
 }
 

@@ -1,8 +1,7 @@
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Role } from '@nappe/shared';
+import { Role, type Page } from '@nappe/shared';
 import { Roles } from '../auth/decorators/roles.decorator.js';
-import type { Page } from '../common/page.js';
 import { ListUsersQuery } from './dto/list-users.query.js';
 import type { UserListItem } from './user.mapper.js';
 import { UsersService } from './users.service.js';

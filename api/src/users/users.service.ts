@@ -1,7 +1,7 @@
+import type { Page } from '@nappe/shared';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { IsNull, Repository } from 'typeorm';
-import type { Page } from '../common/page.js';
 import type { ListUsersQuery } from './dto/list-users.query.js';
 import { User } from './entities/user.entity.js';
 import { toUserListItem, type UserListItem } from './user.mapper.js';

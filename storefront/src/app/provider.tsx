@@ -1,10 +1,11 @@
 import { ChakraProvider } from '@chakra-ui/react';
+import { ApiClientProvider } from '@nappe/web-kit/auth';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
-import { useEffect, type ReactNode } from 'react';
-import { authKeys } from '../features/auth/api/auth-keys';
+import type { ReactNode } from 'react';
 import { api } from '../lib/api-client';
 import { system } from '../theme';
 
+/** The storefront's theme, the query cache, and its API client for the account hooks. */
 export function AppProvider({
   queryClient,
   children,
@@ -12,18 +13,11 @@ export function AppProvider({
   queryClient: QueryClient;
   children: ReactNode;
 }) {
-  // When a refresh fails mid-session, every screen learns at once that nobody is signed in.
-  useEffect(
-    () =>
-      api.subscribe((session) => {
-        if (session === null) queryClient.setQueryData(authKeys.me(), null);
-      }),
-    [queryClient],
-  );
-
   return (
     <ChakraProvider value={system}>
-      <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>
+      <QueryClientProvider client={queryClient}>
+        <ApiClientProvider client={api}>{children}</ApiClientProvider>
+      </QueryClientProvider>
     </ChakraProvider>
   );
 }

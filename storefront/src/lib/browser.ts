@@ -1,3 +1,4 @@
+import { saveDownloadedFile } from '@nappe/web-kit';
 import type { DownloadedFile } from './api-client';
 
 /**
@@ -10,18 +11,9 @@ export const browser = {
     window.location.assign(url);
   },
 
-  /** Offer a file to save, as a download of an in-memory copy. */
+  /** Offer a file to save, as a download of an in-memory copy (web-kit's `saveDownloadedFile`). */
   save(file: DownloadedFile, fallbackName: string): void {
-    const href = URL.createObjectURL(file.blob);
-    const link = document.createElement('a');
-    link.href = href;
-    link.download = file.fileName ?? fallbackName;
-    link.rel = 'noopener';
-    document.body.append(link);
-    link.click();
-    link.remove();
-    // Give the browser a moment to start the download before the copy is released.
-    window.setTimeout(() => URL.revokeObjectURL(href), 30_000);
+    saveDownloadedFile(file, fallbackName);
   },
 };
 

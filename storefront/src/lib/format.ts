@@ -1,4 +1,4 @@
-import { formatMoney } from '@nappe/shared';
+import { formatMoney, plural } from '@nappe/shared';
 
 /**
  * How the storefront writes money and counts (dates: `dates.ts`). Money arrives as integer minor
@@ -10,10 +10,6 @@ export const LOCALE = 'en-GB';
 
 export function money(minor: number, currency: string): string {
   return formatMoney(minor, currency, LOCALE);
-}
-
-export function plural(n: number, one: string, many = `${one}s`): string {
-  return `${n.toLocaleString(LOCALE)} ${n === 1 ? one : many}`;
 }
 
 /**

@@ -1,10 +1,4 @@
-/** One page of a list: every list endpoint of the API is paginated and capped. */
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
+import type { Page } from '@nappe/shared';
 
 /** How many pages a list has (at least one, so an empty list still has a first page). */
 export function pageCount(page: Pick<Page<unknown>, 'total' | 'pageSize'>): number {

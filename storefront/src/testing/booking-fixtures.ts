@@ -11,12 +11,12 @@ import {
   type DayStatus,
   type IsoDate,
   type OrderDetail,
+  type Page,
   type PricingSnapshot,
   type Quote,
 } from '@nappe/shared';
 import { http, HttpResponse } from 'msw';
 import type { PublicAllergens, PublicMenu } from '../features/menus/api/types';
-import type { Page } from '../lib/page';
 import { clientUser } from './fixtures';
 
 /*

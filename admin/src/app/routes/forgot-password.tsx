@@ -1,9 +1,9 @@
 import { Button, Link, Stack, Text } from '@chakra-ui/react';
+import { ForgotPasswordForm } from '@nappe/web-kit/auth';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
-import { ForgotPasswordForm } from '../../features/auth/components/forgot-password-form';
 import { AccountCard } from './account-card';
 
 /**

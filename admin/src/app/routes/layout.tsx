@@ -22,7 +22,7 @@ import { RoleBadge } from '../../components/ui/role-badge';
 import { Wordmark } from '../../components/ui/wordmark';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
-import { useLogout } from '../../features/auth/api/logout';
+import { useLogout } from '@nappe/web-kit/auth';
 import { sectionsFor } from './navigation';
 
 export const MAIN_ID = 'main-content';

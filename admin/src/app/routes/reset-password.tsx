@@ -1,10 +1,9 @@
 import { Alert, Button, Link, Stack, Text } from '@chakra-ui/react';
+import { RESET_TOKEN, ResetPasswordForm } from '@nappe/web-kit/auth';
 import { useState } from 'react';
 import { Link as RouterLink, useSearchParams } from 'react-router';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
-import { RESET_TOKEN } from '../../features/auth/api/confirm-password-reset';
-import { ResetPasswordForm } from '../../features/auth/components/reset-password-form';
 import { AccountCard } from './account-card';
 
 const CUT_LINK =

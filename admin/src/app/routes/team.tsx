@@ -24,13 +24,13 @@ import { paths } from '../../config/paths';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { RequireRole } from '../../features/auth/components/require-role';
 import { useStudio } from '../../features/studio/api/get-studio';
-import { ApiError } from '../../lib/api-client';
 import { USERS_PAGE_SIZE, usersQueryOptions, useUsers } from '../../features/users/api/get-users';
 import { invitationsQueryOptions, useInvitations } from '../../features/users/api/invitations';
 import { InvitationsList } from '../../features/users/components/invitations-list';
 import { InviteForm } from '../../features/users/components/invite-form';
 import { MemberActions } from '../../features/users/components/member-actions';
 import { UsersTable, UsersTableSkeleton } from '../../features/users/components/users-table';
+import { errorMessage } from '../../lib/error-message';
 
 function pageFrom(value: string | null): number {
   const page = Number(value);
@@ -186,11 +186,7 @@ function Team({ currentUserId }: { currentUserId: string }) {
                 <Alert.Indicator />
                 <Alert.Content gap="3">
                   <Alert.Title>The list of accounts could not be loaded</Alert.Title>
-                  <Alert.Description>
-                    {users.error instanceof ApiError && users.error.status >= 500
-                      ? 'The server ran into a problem. Please try again in a moment.'
-                      : users.error.message}
-                  </Alert.Description>
+                  <Alert.Description>{errorMessage(users.error)}</Alert.Description>
                   <Button
                     size="sm"
                     variant="outline"

@@ -11,7 +11,14 @@ import {
   Stack,
   Text,
 } from '@chakra-ui/react';
-import { addIsoDays, Role, type AuthUser, type PrepDay } from '@nappe/shared';
+import {
+  addIsoDays,
+  plural,
+  Role,
+  type AuthUser,
+  type PrepDay,
+  type PrepPlanView,
+} from '@nappe/shared';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { ChevronRightIcon, InboxIcon } from '../../components/ui/icons';
@@ -22,7 +29,6 @@ import { useMe } from '../../features/auth/api/get-me';
 import { useConfirmedEvents, useWaitingRequestCount } from '../../features/prep/api/get-day-events';
 import { usePrepPlan } from '../../features/prep/api/get-prep-plan';
 import { usePrepSchedule } from '../../features/prep/api/get-prep-schedule';
-import type { PrepPlanView } from '../../features/prep/api/types';
 import { DayRecipes } from '../../features/prep/components/day-recipes';
 import { EventList } from '../../features/prep/components/event-list';
 import {
@@ -38,7 +44,7 @@ import {
   TaskList,
 } from '../../features/prep/components/task-list';
 import { studioToday } from '../../features/prep/lib/dates';
-import { duration, longDate, plural, shortDate } from '../../features/prep/lib/format';
+import { duration, longDate, shortDate } from '../../features/prep/lib/format';
 import { useStudio } from '../../features/studio/api/get-studio';
 import { deviceTimeZone, formatStudioDate, greeting } from '../../lib/studio-time';
 

@@ -8,10 +8,10 @@ import {
   type AllergenReport,
   type Dessert,
   type IngredientLabel,
+  type Page,
   type PlateCost,
 } from '@nappe/shared';
 import { EntityManager, In } from 'typeorm';
-import type { Page } from '../../common/page.js';
 import { PhotoStorage } from '../../files/photo-storage.service.js';
 import {
   assertWriteKeepsCatalogue,

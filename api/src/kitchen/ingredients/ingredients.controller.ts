@@ -11,11 +11,10 @@ import {
   Query,
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Role } from '@nappe/shared';
+import { Role, type Page } from '@nappe/shared';
 import { CurrentUser } from '../../auth/decorators/current-user.decorator.js';
 import { Roles } from '../../auth/decorators/roles.decorator.js';
 import type { Principal } from '../../auth/principal.js';
-import type { Page } from '../../common/page.js';
 import { ZodValidationPipe } from '../../common/zod-validation.pipe.js';
 import { ingredientBody, type IngredientBody } from '../dto/kitchen-bodies.js';
 import { KitchenListQuery } from '../dto/kitchen-queries.js';

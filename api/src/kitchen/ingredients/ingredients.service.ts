@@ -1,7 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
-import { Role, type Ingredient } from '@nappe/shared';
-import type { Page } from '../../common/page.js';
+import { Role, type Ingredient, type Page } from '@nappe/shared';
 import {
   assertWriteKeepsCatalogue,
   inUseConflict,

@@ -12,10 +12,9 @@ import {
   UploadedFile,
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Role } from '@nappe/shared';
+import { Role, type Page } from '@nappe/shared';
 import { Public } from '../../auth/decorators/public.decorator.js';
 import { Roles } from '../../auth/decorators/roles.decorator.js';
-import type { Page } from '../../common/page.js';
 import { ZodValidationPipe } from '../../common/zod-validation.pipe.js';
 import { PhotoUpload } from '../../files/photo-upload.decorator.js';
 import { menuBody, type MenuBody } from '../dto/kitchen-bodies.js';

@@ -6,9 +6,9 @@ import {
   suggestMenuPrice,
   type Menu,
   type MenuCost,
+  type Page,
 } from '@nappe/shared';
 import { EntityManager, In } from 'typeorm';
-import type { Page } from '../../common/page.js';
 import { PhotoStorage } from '../../files/photo-storage.service.js';
 import {
   assertWriteKeepsCatalogue,

@@ -11,9 +11,8 @@ import {
   Query,
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Role, type MixBalance, type RecipeCost } from '@nappe/shared';
+import { Role, type MixBalance, type Page, type RecipeCost } from '@nappe/shared';
 import { Roles } from '../../auth/decorators/roles.decorator.js';
-import type { Page } from '../../common/page.js';
 import { ZodValidationPipe } from '../../common/zod-validation.pipe.js';
 import { recipeBody, type RecipeBody } from '../dto/kitchen-bodies.js';
 import { KitchenListQuery, MixBalanceQuery, ScaleQuery } from '../dto/kitchen-queries.js';

@@ -13,12 +13,12 @@ import {
   type ExpandedRecipe,
   type IngredientLabel,
   type MixBalance,
+  type Page,
   type Recipe,
   type RecipeCost,
   type ScaleResult,
 } from '@nappe/shared';
 import { EntityManager, In } from 'typeorm';
-import type { Page } from '../../common/page.js';
 import {
   assertWriteKeepsCatalogue,
   badRequest,

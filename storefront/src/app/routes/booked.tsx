@@ -10,7 +10,12 @@ import {
   Stack,
   Text,
 } from '@chakra-ui/react';
-import { ORDER_STATUS_LABELS_FOR_CLIENT, OrderStatus, type OrderDetail } from '@nappe/shared';
+import {
+  ORDER_STATUS_LABELS_FOR_CLIENT,
+  OrderStatus,
+  plural,
+  type OrderDetail,
+} from '@nappe/shared';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import {
@@ -31,7 +36,7 @@ import { useCheckoutReturn } from '../../features/orders/api/return-from-checkou
 import { OrderStatusBadge } from '../../features/orders/components/order-status-badge';
 import { balanceWords } from '../../features/orders/components/order-card';
 import { longDate } from '../../lib/dates';
-import { money, plural } from '../../lib/format';
+import { money } from '../../lib/format';
 import { requireUserLoader } from '../guards';
 
 export const bookedLoader = (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {

@@ -10,7 +10,7 @@ import {
   Tabs,
   Text,
 } from '@chakra-ui/react';
-import { ORDER_STATUS_LABELS_FOR_CLIENT, type OrderDetail } from '@nappe/shared';
+import { ORDER_STATUS_LABELS_FOR_CLIENT, plural, type OrderDetail } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import {
@@ -50,7 +50,7 @@ import { StatusTimeline } from '../../features/orders/components/status-timeline
 import { ApiError } from '../../lib/api-client';
 import { browser } from '../../lib/browser';
 import { dateTime, longDate } from '../../lib/dates';
-import { money, plural } from '../../lib/format';
+import { money } from '../../lib/format';
 import { requireUserLoader } from '../guards';
 import { warm } from '../loaders';
 import { EVENT_NOT_FOUND, keepOnSearchChange } from '../screen-loader-parts';

@@ -1,9 +1,9 @@
 import { Button, Stack, Text } from '@chakra-ui/react';
+import { ForgotPasswordForm } from '@nappe/web-kit/auth';
 import { useState } from 'react';
 import { PageTitle } from '../../components/ui/page-title';
 import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
-import { ForgotPasswordForm } from '../../features/auth/components/forgot-password-form';
 import { AuthCard } from './auth-card';
 
 /**

@@ -24,7 +24,7 @@ import { LoadError } from '../../components/ui/query-state';
 import { Skeleton } from '../../components/ui/skeleton';
 import { paths } from '../../config/paths';
 import { YourDataSection } from '../../features/account/components/your-data-section';
-import { authKeys } from '../../features/auth/api/auth-keys';
+import { authKeys } from '@nappe/web-kit/auth';
 import { RequireUser } from '../../features/auth/components/require-user';
 import { ordersQueryOptions, useOrders } from '../../features/orders/api/get-orders';
 import { OrderCard } from '../../features/orders/components/order-card';

@@ -4,54 +4,28 @@ import { describe, expect, it } from 'vitest';
 import { renderApp } from '../../testing/render-app';
 import { server } from '../../testing/server';
 
-// The link is the one the API mails (api/src/auth/password-reset.service.ts):
-// /reset-password?token= with 32 random bytes in base64url (43 characters, RFC 4648 §5).
-// The messages are the API's own (api/src/auth/dto/password-reset.dto.ts, password-strength.ts).
+// The form itself (length check, strength verdict on the field, 429, network errors) is tested
+// once, in web-kit (src/auth/reset-password-form.test.tsx); here, the storefront's page around it.
+// A token is 32 random bytes in base64url, 43 characters (RFC 4648 §5), as the API mails it.
 const TOKEN = 'Qm9uYm9uLWF1LWNhcmFtZWwtZXQtZmxldXItZGUtc2V';
-const LINK_UNUSABLE = 'This reset link has expired or was already used. Ask for a new one.';
-const WEAK =
-  'This password is too easy to guess: it is a common password or a simple pattern. A few unrelated words make a strong one.';
 
-function confirmApi(answer: () => Response = () => new HttpResponse(null, { status: 204 })) {
-  const sent: unknown[] = [];
-  server.use(
-    http.post('/api/auth/password-reset/confirm', async ({ request }) => {
-      sent.push(await request.json());
-      return answer();
-    }),
-  );
-  return sent;
-}
-
-const badRequest = (message: string) => () =>
-  HttpResponse.json({ statusCode: 400, message: [message], error: 'Bad Request' }, { status: 400 });
-
-async function choose(user: ReturnType<typeof renderApp>['user'], password: string) {
-  await user.type(await screen.findByLabelText('New password'), password);
-  await user.click(screen.getByRole('button', { name: 'Save the new password' }));
-}
-
-describe('Choose a new password (/reset-password)', () => {
-  it('says at once when the link has no usable token, without asking the server', async () => {
-    expect(TOKEN).toHaveLength(43);
-    const sent = confirmApi();
-    for (const url of ['/reset-password', '/reset-password?token=cut-in-half']) {
-      const { unmount } = renderApp(url);
-      expect(
-        await screen.findByRole('heading', { level: 1, name: 'This link cannot be used' }),
-      ).toBeInTheDocument();
-      expect(screen.getByRole('alert')).toHaveTextContent(/may have been cut when it was copied/);
-      expect(screen.getByRole('link', { name: 'Ask for a new link' })).toHaveAttribute(
-        'href',
-        '/forgot-password',
-      );
-      expect(screen.queryByLabelText('New password')).not.toBeInTheDocument();
-      unmount();
-    }
-    expect(sent).toEqual([]);
+describe('Choose a new password (/reset-password, storefront)', () => {
+  it('a link with no usable token: the problem page, no form, nothing sent', async () => {
+    // Any request would be unhandled here, which fails the test (onUnhandledRequest: 'error').
+    renderApp('/reset-password?token=cut-in-half');
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'This link cannot be used' }),
+    ).toBeInTheDocument();
+    expect(document.title).toBe('Reset link cannot be used · Nappe');
+    expect(screen.getByRole('alert')).toHaveTextContent(/may have been cut when it was copied/);
+    expect(screen.getByRole('link', { name: 'Ask for a new link' })).toHaveAttribute(
+      'href',
+      '/forgot-password',
+    );
+    expect(screen.queryByLabelText('New password')).not.toBeInTheDocument();
   });
 
-  it('asks the browser not to send the address (and its token) to any other site', async () => {
+  it('asks the browser to send no Referer, so the token stays on this page', async () => {
     renderApp(`/reset-password?token=${TOKEN}`);
     await screen.findByLabelText('New password');
     await waitFor(() =>
@@ -63,71 +37,38 @@ describe('Choose a new password (/reset-password)', () => {
     expect(document.title).toBe('Choose a new password · Nappe');
   });
 
-  it('checks the length before sending, with show/hide on the field', async () => {
-    const sent = confirmApi();
-    const { user } = renderApp(`/reset-password?token=${TOKEN}`);
-    await choose(user, 'short');
-    // OWASP ASVS 5.0 V6.2.1: at least 12 characters (PASSWORD_MIN_LENGTH in shared/src/auth).
-    expect(
-      await screen.findByText('Use at least 12 characters — a few words make a good passphrase.'),
-    ).toBeInTheDocument();
-    const field = screen.getByLabelText('New password');
-    expect(field).toHaveAttribute('aria-invalid', 'true');
-    expect(field).toHaveAttribute('type', 'password');
-    await user.click(screen.getByRole('button', { name: 'Show password' }));
-    expect(field).toHaveAttribute('type', 'text');
-    expect(sent).toEqual([]);
-  });
-
-  it('puts the server’s strength verdict on the field and keeps the form', async () => {
-    const sent = confirmApi(badRequest(WEAK));
-    const { user } = renderApp(`/reset-password?token=${TOKEN}`);
-    await choose(user, 'password1234');
-    expect(await screen.findByText(WEAK)).toBeInTheDocument();
-    const field = screen.getByLabelText('New password');
-    expect(field).toHaveAttribute('aria-invalid', 'true');
-    await waitFor(() => expect(field).toHaveFocus());
-    expect(screen.queryByRole('alert')).not.toBeInTheDocument();
-    expect(sent).toEqual([{ token: TOKEN, password: 'password1234' }]);
-  });
-
-  it('an expired or used link: the server’s words and a way to ask again', async () => {
-    confirmApi(badRequest(LINK_UNUSABLE));
-    const { user, router } = renderApp(`/reset-password?token=${TOKEN}`);
-    await choose(user, 'quince rye and smoked honey');
-    expect(
-      await screen.findByRole('heading', { level: 1, name: 'This link cannot be used' }),
-    ).toBeInTheDocument();
-    expect(within(screen.getByRole('alert')).getByText(LINK_UNUSABLE)).toBeInTheDocument();
-    expect(screen.queryByLabelText('New password')).not.toBeInTheDocument();
-    await user.click(screen.getByRole('link', { name: 'Ask for a new link' }));
-    await waitFor(() => expect(router.state.location.pathname).toBe('/forgot-password'));
-  });
-
-  it('saves the new password, then offers Sign in', async () => {
-    const sent = confirmApi();
-    const { user, router } = renderApp(`/reset-password?token=${TOKEN}`);
-    await choose(user, 'quince rye and smoked honey');
-    expect(
-      await screen.findByRole('heading', { level: 1, name: 'Password changed' }),
-    ).toBeInTheDocument();
-    expect(screen.getByText(/signed out on every device/)).toBeInTheDocument();
-    expect(sent).toEqual([{ token: TOKEN, password: 'quince rye and smoked honey' }]);
-    await user.click(within(screen.getByRole('main')).getByRole('link', { name: 'Sign in' }));
-    await waitFor(() => expect(router.state.location.pathname).toBe('/sign-in'));
-  });
-
-  it('tells how long to wait on a 429', async () => {
-    confirmApi(() =>
-      HttpResponse.json(
-        { statusCode: 429, message: 'ThrottlerException: Too Many Requests' },
-        { status: 429, headers: { 'Retry-After': '45' } },
+  it('a link the server refuses replaces the form with its words', async () => {
+    // The API's one answer for an unknown, expired, used or replaced link (password-reset.dto.ts).
+    const unusable = 'This reset link has expired or was already used. Ask for a new one.';
+    server.use(
+      http.post('/api/auth/password-reset/confirm', () =>
+        HttpResponse.json({ statusCode: 400, message: [unusable] }, { status: 400 }),
       ),
     );
     const { user } = renderApp(`/reset-password?token=${TOKEN}`);
-    await choose(user, 'quince rye and smoked honey');
+    await user.type(await screen.findByLabelText('New password'), 'quince rye and smoked honey');
+    await user.click(screen.getByRole('button', { name: 'Save the new password' }));
     const alert = await screen.findByRole('alert');
-    expect(within(alert).getByText(/choosing a new password is paused/)).toBeInTheDocument();
-    expect(screen.getByRole('button', { name: 'Save the new password' })).toBeDisabled();
+    expect(within(alert).getByText(unusable)).toBeInTheDocument();
+    expect(
+      screen.getByRole('heading', { level: 1, name: 'This link cannot be used' }),
+    ).toBeVisible();
+    expect(screen.queryByLabelText('New password')).not.toBeInTheDocument();
+  });
+
+  it('saved: Password changed, then Sign in to follow the events', async () => {
+    server.use(
+      http.post('/api/auth/password-reset/confirm', () => new HttpResponse(null, { status: 204 })),
+    );
+    const { user, router } = renderApp(`/reset-password?token=${TOKEN}`);
+    await user.type(await screen.findByLabelText('New password'), 'quince rye and smoked honey');
+    await user.click(screen.getByRole('button', { name: 'Save the new password' }));
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Password changed' }),
+    ).toBeInTheDocument();
+    expect(document.title).toBe('Password changed · Nappe');
+    expect(screen.getByText('Sign in with your new password to follow your events.')).toBeVisible();
+    await user.click(within(screen.getByRole('main')).getByRole('link', { name: 'Sign in' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/sign-in'));
   });
 });

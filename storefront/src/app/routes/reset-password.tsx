@@ -1,11 +1,10 @@
 import { Alert, Button, Stack, Text } from '@chakra-ui/react';
+import { RESET_TOKEN, ResetPasswordForm } from '@nappe/web-kit/auth';
 import { useState } from 'react';
 import { Link as RouterLink, useSearchParams } from 'react-router';
 import { PageTitle } from '../../components/ui/page-title';
 import { TextLink } from '../../components/ui/text-link';
 import { paths } from '../../config/paths';
-import { RESET_TOKEN } from '../../features/auth/api/confirm-password-reset';
-import { ResetPasswordForm } from '../../features/auth/components/reset-password-form';
 import { AuthCard } from './auth-card';
 
 const CUT_LINK =

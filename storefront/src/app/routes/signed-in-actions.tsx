@@ -2,7 +2,7 @@ import { Button, HStack, Text } from '@chakra-ui/react';
 import { useEffect, useRef, useState } from 'react';
 import { useLocation, useNavigate } from 'react-router';
 import { paths } from '../../config/paths';
-import { useLogout } from '../../features/auth/api/logout';
+import { useLogout } from '@nappe/web-kit/auth';
 
 /** The header's account controls for someone signed in: who they are, and a way out. */
 export function SignedInActions({ name }: { name: string }) {

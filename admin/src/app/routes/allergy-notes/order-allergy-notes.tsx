@@ -1,4 +1,5 @@
 import { Badge, Button, Flex, Heading, Stack, Text } from '@chakra-ui/react';
+import { plural } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link as RouterLink, useParams, type LoaderFunctionArgs } from 'react-router';
 import { AllergyIcon, GuestsIcon, TraceIcon } from '../../../components/ui/icons';
@@ -18,7 +19,6 @@ import {
 } from '../../../features/allergy-notes/components/load-states';
 import {
   hasRequirement,
-  plural,
   unresolvedPlates,
 } from '../../../features/allergy-notes/lib/allergen-words';
 import { formatEventDate } from '../../../features/allergy-notes/lib/event-window';

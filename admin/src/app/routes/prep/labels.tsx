@@ -1,5 +1,5 @@
 import { Alert, Flex, SimpleGrid, Stack, Text } from '@chakra-ui/react';
-import { addIsoDays } from '@nappe/shared';
+import { addIsoDays, plural } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { paths } from '../../../config/paths';
@@ -17,7 +17,7 @@ import {
   PrepSkeleton,
 } from '../../../features/prep/components/prep-states';
 import { dayFromParams } from '../../../features/prep/lib/dates';
-import { longDate, plural } from '../../../features/prep/lib/format';
+import { longDate } from '../../../features/prep/lib/format';
 import { warm } from '../kitchen/kitchen-shell';
 import { loaderToday, WithPrepViewer, type PrepViewer } from './prep-shell';
 

@@ -1,8 +1,7 @@
-import { OrderStatus, type OrderSummary } from '@nappe/shared';
+import { OrderStatus, type OrderSummary, type Page } from '@nappe/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { allergyNotesKeys } from './allergy-notes-keys';
-import type { Page } from './types';
 
 /** The API caps a page of orders at 100. */
 const PAGE_SIZE = 100;

@@ -1,7 +1,8 @@
+import type { Page } from '@nappe/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { allergyNotesKeys } from './allergy-notes-keys';
-import type { DessertComponents, Page, RecipeChoice } from './types';
+import type { DessertComponents, RecipeChoice } from './types';
 
 /** `GET /api/desserts/:id`: the components a substitution can leave out or replace. */
 export const getDessertComponents = (dessertId: string, signal?: AbortSignal) =>

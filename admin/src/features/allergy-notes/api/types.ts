@@ -34,10 +34,3 @@ export interface RecipeChoice {
   id: string;
   name: string;
 }
-
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}

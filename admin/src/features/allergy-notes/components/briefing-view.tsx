@@ -1,8 +1,8 @@
 import { Alert, Badge, Box, Button, Heading, HStack, List, Stack, Text } from '@chakra-ui/react';
+import { plural } from '@nappe/shared';
 import { AllergyIcon, TraceIcon } from '../../../components/ui/icons';
 import { useDownloadBriefingPdf } from '../api/download-briefing-pdf';
 import type { Briefing, BriefingGuest } from '../api/types';
-import { plural } from '../lib/allergen-words';
 import { describeError } from '../lib/describe-error';
 import { formatEventDate } from '../lib/event-window';
 import { CautionLine } from './caution-line';

@@ -10,11 +10,10 @@ import {
   Stack,
   Text,
 } from '@chakra-ui/react';
-import { OrderStatus, type OrderSummary } from '@nappe/shared';
+import { OrderStatus, plural, type OrderSummary } from '@nappe/shared';
 import { Link as RouterLink } from 'react-router';
 import { AllergyIcon, ChevronRightIcon, TraceIcon } from '../../../components/ui/icons';
 import type { AllergyCounts } from '../api/types';
-import { plural } from '../lib/allergen-words';
 import { formatEventDate } from '../lib/event-window';
 import { ClearIcon, SwapIcon } from './icons';
 

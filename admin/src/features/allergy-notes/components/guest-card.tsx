@@ -1,8 +1,9 @@
 import { Badge, Box, Button, Heading, HStack, List, Stack, Text } from '@chakra-ui/react';
+import { plural } from '@nappe/shared';
 import { useId, useRef, useState } from 'react';
 import { AllergyIcon, TraceIcon } from '../../../components/ui/icons';
 import type { GuestNote, GuestPlateNote } from '../api/types';
-import { finalConflicts, plateState, plural, type PlateState } from '../lib/allergen-words';
+import { finalConflicts, plateState, type PlateState } from '../lib/allergen-words';
 import { formatInstant } from '../lib/event-window';
 import { AdvisoryRows, ConflictRows } from './conflict-rows';
 import { ClearIcon, SwapIcon } from './icons';

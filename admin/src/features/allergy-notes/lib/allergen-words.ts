@@ -158,5 +158,3 @@ export function hasRequirement(guest: GuestNote): boolean {
 export function unresolvedPlates(guests: readonly GuestNote[]): number {
   return guests.reduce((n, g) => n + g.plates.filter((p) => !p.resolved).length, 0);
 }
-
-export { plural } from '@nappe/shared';

@@ -1,7 +1,7 @@
 import type { AuthSession } from '@nappe/shared';
+import { authKeys } from '@nappe/web-kit/auth';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { authKeys } from './auth-keys';
 
 export interface AcceptInvitationInput {
   token: string;

@@ -1,7 +1,7 @@
 import type { AuthSession, AuthUser, LoginInput } from '@nappe/shared';
+import { authKeys } from '@nappe/web-kit/auth';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { authKeys } from './auth-keys';
 import { isAdmitted } from './get-me';
 
 /** A client signed in with the right password, at the wrong door. */

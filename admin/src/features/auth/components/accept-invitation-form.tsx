@@ -1,14 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Field, Input, Stack } from '@chakra-ui/react';
 import { nameSchema, PASSWORD_MIN_LENGTH, passwordSchema, type AuthUser } from '@nappe/shared';
+import {
+  describeAuthError,
+  FormErrorAlert,
+  PasswordInput,
+  useCountdown,
+} from '@nappe/web-kit/auth';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { PasswordInput } from '../../../components/ui/password-input';
 import { ApiError } from '../../../lib/api-client';
 import { useAcceptInvitation } from '../api/accept-invitation';
-import { describeAuthError } from './describe-auth-error';
-import { FormErrorAlert } from './form-error-alert';
-import { useCountdown } from './use-countdown';
 
 /** The same name and password rules as the API's accept-invitation body (shared schemas). */
 const acceptFormSchema = z.object({ name: nameSchema, password: passwordSchema });

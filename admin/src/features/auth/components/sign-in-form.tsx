@@ -1,14 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Alert, Button, Field, Input, Link, Stack } from '@chakra-ui/react';
 import { loginSchema, type AuthUser } from '@nappe/shared';
+import {
+  describeAuthError,
+  FormErrorAlert,
+  PasswordInput,
+  useCountdown,
+} from '@nappe/web-kit/auth';
 import { useForm } from 'react-hook-form';
-import { PasswordInput } from '../../../components/ui/password-input';
 import { env } from '../../../config/env';
 import { ApiError } from '../../../lib/api-client';
 import { NotAdmittedError, useLogin } from '../api/login';
-import { describeAuthError } from './describe-auth-error';
-import { FormErrorAlert } from './form-error-alert';
-import { useCountdown } from './use-countdown';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (user: AuthUser) => void }) {
   const login = useLogin();

@@ -11,7 +11,7 @@ import {
   Stack,
   Text,
 } from '@chakra-ui/react';
-import { dateInTimeZone, OrderStatus } from '@nappe/shared';
+import { dateInTimeZone, OrderStatus, plural } from '@nappe/shared';
 import { useState, type ComponentType, type ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { AllergyIcon, CalendarIcon, CautionIcon, InboxIcon } from '../../../components/ui/icons';
@@ -22,7 +22,6 @@ import {
   formatDayLong,
   formatDayShort,
   formatMinor,
-  plural,
   relativeDay,
   statusLabel,
 } from '../lib/format';

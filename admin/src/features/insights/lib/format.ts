@@ -96,8 +96,6 @@ export function formatPercent(percent: number): string {
 
 export const formatCount = (n: number) => new Intl.NumberFormat('en-GB').format(n);
 
-export { plural } from '@nappe/shared';
-
 const STATUS_LABELS: Record<OrderStatus, string> = {
   [OrderStatus.PendingPayment]: 'Awaiting payment',
   [OrderStatus.Requested]: 'Requested',

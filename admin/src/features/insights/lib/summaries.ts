@@ -1,5 +1,6 @@
+import { plural } from '@nappe/shared';
 import type { Dashboard, FoodCostMonth, PlatesWeek, RevenueMonth } from '../api/get-dashboard';
-import { formatDate, formatMinor, formatMonthLong, formatPercent, plural } from './format';
+import { formatDate, formatMinor, formatMonthLong, formatPercent } from './format';
 
 /** A studio with nothing booked, paid or served yet: the dashboard says so instead of drawing zeros. */
 export function isEmptyDashboard(d: Dashboard): boolean {

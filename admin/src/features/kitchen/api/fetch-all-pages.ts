@@ -1,5 +1,5 @@
+import type { Page } from '@nappe/shared';
 import { api } from '../../../lib/api-client';
-import type { Page } from './types';
 
 /** The API caps a page at 100 items. */
 export const KITCHEN_PAGE_SIZE = 100;

@@ -5,13 +5,6 @@ import type { Dessert, Ingredient, Menu, MenuCost, Recipe, ScaleResult } from '@
  * the domain shape from `@nappe/shared`, plus what the server owns.
  */
 
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
 export interface PhotoResponse {
   id: string;
   url: string;

@@ -1,7 +1,7 @@
 import { Alert, Button, CloseButton, Dialog, Portal, Text } from '@chakra-ui/react';
 import { useState } from 'react';
 import { TrashIcon } from '../../../components/ui/icons';
-import { ApiError } from '../../../lib/api-client';
+import { errorMessage } from '../../../lib/error-message';
 
 /**
  * Delete, after asking. When the server refuses because something still uses the item (409),
@@ -31,13 +31,7 @@ export function DeleteButton({
       setOpen(false);
       onDeleted();
     } catch (e) {
-      setError(
-        e instanceof ApiError
-          ? e.status >= 500
-            ? 'Something went wrong on our side. Please try again in a moment.'
-            : e.messages.join(' ')
-          : 'Please try again in a moment.',
-      );
+      setError(errorMessage(e));
     } finally {
       setPending(false);
     }

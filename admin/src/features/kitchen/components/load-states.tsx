@@ -1,6 +1,6 @@
 import { Alert, Box, Button, EmptyState, Skeleton, Stack, VisuallyHidden } from '@chakra-ui/react';
 import type { ReactNode } from 'react';
-import { ApiError } from '../../../lib/api-client';
+import { errorMessage } from '../../../lib/error-message';
 
 /** A list or item that could not be loaded, with a retry that works. */
 export function LoadError({
@@ -14,20 +14,12 @@ export function LoadError({
   onRetry: () => void;
   retrying?: boolean;
 }) {
-  const message =
-    error instanceof ApiError
-      ? error.status === 0
-        ? error.message
-        : error.status >= 500
-          ? 'The server ran into a problem. Please try again in a moment.'
-          : error.message
-      : 'Please try again in a moment.';
   return (
     <Alert.Root status="error" role="alert" borderRadius="l2">
       <Alert.Indicator />
       <Alert.Content gap="3">
         <Alert.Title>{title}</Alert.Title>
-        <Alert.Description>{message}</Alert.Description>
+        <Alert.Description>{errorMessage(error)}</Alert.Description>
         <Button size="sm" variant="outline" alignSelf="start" loading={retrying} onClick={onRetry}>
           Try again
         </Button>

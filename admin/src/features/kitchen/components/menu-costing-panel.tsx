@@ -1,10 +1,10 @@
 import { Box, Field, Heading, Input, InputGroup, Stack, Table, Text } from '@chakra-ui/react';
 import { formatMoney } from '@nappe/shared';
 import { useState } from 'react';
+import { errorMessage } from '../../../lib/error-message';
 import { useMenuCosting } from '../api/get-menu-costing';
 import { parseNumber } from '../lib/form-resolver';
 import { formatNumber } from '../lib/labels';
-import { saveFailureMessage } from '../lib/server-errors';
 
 /**
  * Food cost of a saved menu and the price per guest that meets a target food-cost percentage,
@@ -62,7 +62,7 @@ export function MenuCostingPanel({
               </Text>
             ) : costing.isError ? (
               <Text color="fg.error" role="alert">
-                {saveFailureMessage(costing.error)}
+                {errorMessage(costing.error)}
               </Text>
             ) : (
               <Stack gap="3" opacity={costing.isPlaceholderData ? 0.6 : 1}>

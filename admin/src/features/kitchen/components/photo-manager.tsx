@@ -14,6 +14,7 @@ import {
 import { useEffect, useId, useRef, useState } from 'react';
 import { TrashIcon, UploadIcon } from '../../../components/ui/icons';
 import { ApiError } from '../../../lib/api-client';
+import { errorMessage } from '../../../lib/error-message';
 import type { PhotoResponse } from '../api/types';
 
 /** The API's limit (api/src/files/photo-upload.decorator.ts): 5 MB, JPEG, PNG or WebP. */
@@ -22,18 +23,9 @@ const ACCEPTED = ['image/jpeg', 'image/png', 'image/webp'];
 
 function uploadFailure(error: unknown): string {
   if (!(error instanceof ApiError)) return 'The upload did not finish. Please try again.';
-  switch (error.status) {
-    case 0:
-      return error.message;
-    case 413:
-      return `${error.messages.join(' ')} Photos up to 5 MB are accepted.`;
-    case 415:
-      return `${error.messages.join(' ')} Use a JPEG, PNG or WebP photo.`;
-    default:
-      return error.status >= 500
-        ? 'Something went wrong on our side. Please try again in a moment.'
-        : error.messages.join(' ');
-  }
+  if (error.status === 413) return `${error.messages.join(' ')} Photos up to 5 MB are accepted.`;
+  if (error.status === 415) return `${error.messages.join(' ')} Use a JPEG, PNG or WebP photo.`;
+  return errorMessage(error);
 }
 
 /**

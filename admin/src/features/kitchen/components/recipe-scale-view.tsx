@@ -21,13 +21,13 @@ import {
   type ScaledRecipe,
 } from '@nappe/shared';
 import { useMemo, useState, type FormEvent } from 'react';
+import { errorMessage } from '../../../lib/error-message';
 import type { ScaleQuery } from '../api/kitchen-keys';
 import { useRecipeScaled } from '../api/get-recipe-scaled';
 import type { RecipeResponse } from '../api/types';
 import { parseNumber } from '../lib/form-resolver';
 import { formatGrams, formatNumber, unitLabel } from '../lib/labels';
 import { attempt, indexWith, toDomainDessert } from '../lib/live-kitchen';
-import { saveFailureMessage } from '../lib/server-errors';
 import { BlockSkeleton } from './load-states';
 import type { KitchenCatalogueData } from '../api/types';
 
@@ -245,7 +245,7 @@ export function RecipeScaleView({
           <Alert.Indicator />
           <Alert.Content gap="2">
             <Alert.Title>This could not be scaled</Alert.Title>
-            <Alert.Description>{saveFailureMessage(scaled.error)}</Alert.Description>
+            <Alert.Description>{errorMessage(scaled.error)}</Alert.Description>
             <Button
               size="sm"
               variant="outline"

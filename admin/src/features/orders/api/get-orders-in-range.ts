@@ -1,8 +1,7 @@
-import type { OrderSummary } from '@nappe/shared';
+import type { OrderSummary, Page } from '@nappe/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { orderKeys } from './order-keys';
-import type { Page } from './types';
 
 /** The API's largest page (ORDERS_MAX_PAGE_SIZE in api/src/orders/dto/order-queries.ts). */
 const PAGE_SIZE = 100;

@@ -1,9 +1,8 @@
-import type { OrderSummary } from '@nappe/shared';
+import type { OrderSummary, Page } from '@nappe/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { apiQueryFor, ORDERS_PAGE_SIZE, type OrderFilters } from '../lib/order-filters';
 import { orderKeys } from './order-keys';
-import type { Page } from './types';
 
 /** `GET /api/orders?page&pageSize&status&from&to&q` (chef and staff: every order, newest first). */
 export const getOrders = (filters: OrderFilters, signal?: AbortSignal) =>

@@ -2,14 +2,6 @@ import type { AllergyNotes, OrderDetail, UnresolvedConflict } from '@nappe/share
 
 /** Response shapes the Orders screens read that are not in @nappe/shared. */
 
-/** One page of a list (api/src/common/page.ts). */
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
 /** What the order's detail reads of `GET /api/orders/:id/allergy-notes` (the shared contract). */
 export type AllergySummary = Pick<AllergyNotes, 'orderId' | 'advisoryCount'> & {
   guests: Array<Pick<AllergyNotes['guests'][number], 'guestId' | 'label'>>;

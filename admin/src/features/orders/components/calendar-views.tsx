@@ -1,5 +1,5 @@
 import { Badge, Box, Heading, Link, List, Stack, Table, Text } from '@chakra-ui/react';
-import { compareIsoDates, type IsoDate, type OrderSummary } from '@nappe/shared';
+import { compareIsoDates, plural, type IsoDate, type OrderSummary } from '@nappe/shared';
 import { Link as RouterLink } from 'react-router';
 import {
   dayLabel,
@@ -10,7 +10,7 @@ import {
   WEEKDAYS,
   type Month,
 } from '../lib/calendar-month';
-import { plural, statusLabel } from '../lib/format';
+import { statusLabel } from '../lib/format';
 import { OrderStatusBadge } from './order-status-badge';
 
 export interface CalendarData {

@@ -14,6 +14,7 @@ import {
   formatIsoDate,
   formatMoney,
   OrderStatus,
+  plural,
   REASON_MAX,
   transitionsFor,
   type IsoDate,
@@ -23,6 +24,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { ApiError } from '../../../lib/api-client';
+import { paymentErrorMessage } from '../../../lib/error-message';
 import { useCancelOrder, type RefundChoice } from '../api/cancel-order';
 import { useCompleteOrder } from '../api/complete-order';
 import { useConfirmOrder } from '../api/confirm-order';
@@ -30,7 +32,6 @@ import { useDeclineOrder } from '../api/decline-order';
 import { useCancellationPreview } from '../api/get-cancellation-preview';
 import { orderKeys } from '../api/order-keys';
 import type { AllergySummary } from '../api/types';
-import { describeError, plural } from '../lib/format';
 import { ActionDialog, ReasonField } from './action-dialog';
 
 /**
@@ -127,7 +128,7 @@ function ConfirmAction({ order, allergy, allergyNotesHref, onDone }: OrderAction
           return;
         }
       }
-      setError(describeError(e));
+      setError(paymentErrorMessage(e));
     }
   };
 
@@ -252,7 +253,7 @@ function DeclineAction({ order, onDone }: OrderActionsProps) {
         `${updated.reference} is declined. ${paid} is refunded to the client, who is e-mailed.`,
       );
     } catch (e) {
-      setError(describeError(e));
+      setError(paymentErrorMessage(e));
     }
   };
 
@@ -335,7 +336,7 @@ function CancelAction({ order, onDone }: OrderActionsProps) {
         `${updated.reference} is cancelled. ${refundMinor > 0 ? `${money(refundMinor)} is refunded` : 'Nothing is refunded'}; the client is e-mailed.`,
       );
     } catch (e) {
-      setError(describeError(e));
+      setError(paymentErrorMessage(e));
     }
   };
 
@@ -381,7 +382,7 @@ function CancelAction({ order, onDone }: OrderActionsProps) {
           <Alert.Indicator />
           <Alert.Content>
             <Alert.Title>The refund by the policy could not be worked out</Alert.Title>
-            <Alert.Description>{describeError(preview.error)}</Alert.Description>
+            <Alert.Description>{paymentErrorMessage(preview.error)}</Alert.Description>
           </Alert.Content>
         </Alert.Root>
       ) : null}
@@ -449,7 +450,7 @@ function CompleteAction({ order, today, onDone }: OrderActionsProps) {
       setNote('');
       onDone(`${updated.reference} is marked as served.`);
     } catch (e) {
-      setError(describeError(e));
+      setError(paymentErrorMessage(e));
     }
   };
 

@@ -19,6 +19,7 @@ import {
   formatMoney,
   GUEST_ALLERGENS,
   guestAllergenLabel,
+  plural,
   type Diet,
   type GuestAllergen,
   type OrderDetail,
@@ -28,13 +29,12 @@ import type { ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { DownloadButton } from '../../../components/ui/download-button';
 import { AllergyIcon } from '../../../components/ui/icons';
+import { paymentErrorMessage } from '../../../lib/error-message';
 import type { AccessLogEntry, AllergySummary, GuestDetailsRemoved } from '../api/types';
 import {
   ACCESS_KINDS,
-  describeError,
   PAYMENT_KIND_LABELS,
   PAYMENT_STATUS_LABELS,
-  plural,
   ROLE_WORDS,
   shortDate,
   statusLabel,
@@ -201,7 +201,7 @@ export function GuestsSection({
           <Skeleton height="6" maxW="sm" />
         ) : allergy.error ? (
           <Text color="fg.error">
-            The allergy check could not be loaded: {describeError(allergy.error)}
+            The allergy check could not be loaded: {paymentErrorMessage(allergy.error)}
           </Text>
         ) : unresolved > 0 ? (
           <Alert.Root status="warning" borderRadius="l2">
@@ -460,7 +460,9 @@ export function AccessLogSection({
           <Skeleton height="4" width="3/4" />
         </Stack>
       ) : error || !entries ? (
-        <Text color="fg.error">The access record could not be loaded: {describeError(error)}</Text>
+        <Text color="fg.error">
+          The access record could not be loaded: {paymentErrorMessage(error)}
+        </Text>
       ) : entries.length === 0 ? (
         <Text color="fg.muted">Nobody at the studio has opened them yet.</Text>
       ) : (

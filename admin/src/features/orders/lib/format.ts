@@ -6,7 +6,6 @@ import {
   type PaymentKind,
   type PaymentRecordStatus,
 } from '@nappe/shared';
-import { ApiError } from '../../../lib/api-client';
 
 const noonUtc = (date: IsoDate) => isoDayNumber(date) * 86_400_000 + 43_200_000;
 
@@ -76,15 +75,3 @@ export const ROLE_WORDS: Record<string, string> = {
   client: 'client',
   system: 'Nappe',
 };
-
-/** An API error in words a chef can read. */
-export function describeError(error: unknown): string {
-  if (!(error instanceof ApiError)) return 'Something went wrong. Please try again in a moment.';
-  if (error.status === 0) return error.message;
-  if (error.status >= 500 && error.status !== 502 && error.status !== 503) {
-    return 'Something went wrong on our side. Nothing was changed; please try again in a moment.';
-  }
-  return error.messages.join(' ');
-}
-
-export { plural } from '@nappe/shared';

@@ -1,7 +1,8 @@
+import type { PrepPlanView } from '@nappe/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { prepKeys } from './prep-keys';
-import type { DateRange, PrepPlanView } from './types';
+import type { DateRange } from './types';
 
 export const planQuery = (range: DateRange) =>
   new URLSearchParams({ from: range.from, to: range.to }).toString();

@@ -1,7 +1,7 @@
+import type { PrepDaySchedule } from '@nappe/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { prepKeys } from './prep-keys';
-import type { PrepDaySchedule } from './types';
 
 /** `GET /api/prep/schedule?date=`: the production day's tasks in order, with ticks and conflicts. */
 export const getPrepSchedule = (date: string, signal?: AbortSignal) =>

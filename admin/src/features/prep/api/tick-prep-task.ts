@@ -1,7 +1,7 @@
+import type { PrepDaySchedule, ScheduledTask, TaskTick } from '@nappe/shared';
 import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { prepKeys } from './prep-keys';
-import type { PrepDaySchedule, ScheduledTask, TaskTick } from './types';
 
 /** `POST /api/prep/tasks/:taskKey/done` (tick) or `DELETE` (untick); answers with the task. */
 export function setTaskDone(taskKey: string, done: boolean): Promise<ScheduledTask> {

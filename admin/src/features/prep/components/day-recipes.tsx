@@ -9,11 +9,11 @@ import {
   Text,
   VisuallyHidden,
 } from '@chakra-ui/react';
-import type { PlanRecipeRow, RunSchedule } from '@nappe/shared';
+import { plural, type PlanRecipeRow, type RunSchedule } from '@nappe/shared';
 import { Link as RouterLink } from 'react-router';
 import { CautionIcon, ScaleIcon } from '../../../components/ui/icons';
 import { paths } from '../../../config/paths';
-import { celsius, grams, plural, STORAGE_LABELS, when } from '../lib/format';
+import { celsius, grams, STORAGE_LABELS, when } from '../lib/format';
 import { cautionText } from './task-card';
 import { FrozenIcon } from './prep-icons';
 

@@ -1,9 +1,9 @@
 import { Box, Button, Flex, HStack, Stack, Text, VisuallyHidden } from '@chakra-ui/react';
-import type { OrderSummary } from '@nappe/shared';
+import { plural, type OrderSummary } from '@nappe/shared';
 import { Link as RouterLink } from 'react-router';
 import { AllergyIcon, GuestsIcon } from '../../../components/ui/icons';
 import { paths } from '../../../config/paths';
-import { plural, shortDate } from '../lib/format';
+import { shortDate } from '../lib/format';
 
 /**
  * Confirmed events, each with its service time, client, menu and guests, and the way to its

@@ -1,17 +1,14 @@
 import { Badge, Box, Heading, SimpleGrid, Stack, Table, Text } from '@chakra-ui/react';
-import { UNIT_DEFINITIONS, type PlanRecipeRow, type Unit } from '@nappe/shared';
-import type { ReactNode } from 'react';
-import type { PrepPlanView, PurchaseLineView } from '../api/types';
 import {
-  clockOf,
-  grams,
-  longDate,
-  money,
   plural,
-  shortDate,
-  STORAGE_LABELS,
-  when,
-} from '../lib/format';
+  UNIT_DEFINITIONS,
+  type PlanRecipeRow,
+  type PrepPlanView,
+  type PurchaseLineView,
+  type Unit,
+} from '@nappe/shared';
+import type { ReactNode } from 'react';
+import { clockOf, grams, longDate, money, shortDate, STORAGE_LABELS, when } from '../lib/format';
 import { PrepSection } from './prep-states';
 
 function packUnit(unit: Unit, count: number): string {

@@ -9,19 +9,10 @@ import {
   Text,
   VisuallyHidden,
 } from '@chakra-ui/react';
-import { LOCAL_CODE_DEFERRAL, type PrepTask } from '@nappe/shared';
+import { LOCAL_CODE_DEFERRAL, plural, type PrepTask, type ScheduledTask } from '@nappe/shared';
 import { CautionIcon } from '../../../components/ui/icons';
 import { useTickPrepTask } from '../api/tick-prep-task';
-import type { ScheduledTask } from '../api/types';
-import {
-  celsius,
-  clockOf,
-  duration,
-  instantInZone,
-  plural,
-  STEP_KIND_LABELS,
-  when,
-} from '../lib/format';
+import { celsius, clockOf, duration, instantInZone, STEP_KIND_LABELS, when } from '../lib/format';
 import { errorMessage } from '../../../lib/error-message';
 import { ClockIcon, FrozenIcon } from './prep-icons';
 

@@ -1,8 +1,13 @@
 import { Alert, List, Stack, Text } from '@chakra-ui/react';
-import { LOCAL_CODE_DEFERRAL, type PrepConflict, type PrepWarning } from '@nappe/shared';
+import {
+  LOCAL_CODE_DEFERRAL,
+  plural,
+  type PrepConflict,
+  type PrepDaySchedule,
+  type PrepWarning,
+} from '@nappe/shared';
 import { CautionIcon } from '../../../components/ui/icons';
-import type { PrepDaySchedule } from '../api/types';
-import { duration, plural } from '../lib/format';
+import { duration } from '../lib/format';
 import { ClockIcon } from './prep-icons';
 import { TaskCard } from './task-card';
 

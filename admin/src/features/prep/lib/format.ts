@@ -72,8 +72,6 @@ export const money = (minor: number, currency: string): string => formatMoney(mi
 /** "−20 °C", with a real minus sign. */
 export const celsius = (c: number): string => `${c < 0 ? `−${Math.abs(c)}` : String(c)} °C`;
 
-export { plural } from '@nappe/shared';
-
 export const STEP_KIND_LABELS: Record<StepKind, string> = {
   prep: 'Prepare',
   cook: 'Cook',

@@ -17,6 +17,7 @@ import { dateInTimeZone, type StudioSettingsBody, type StudioSettingsView } from
 import { useEffect, useMemo, useState, type ReactNode } from 'react';
 import { Controller, useForm, useWatch, type FieldPath } from 'react-hook-form';
 import { ApiError } from '../../../lib/api-client';
+import { errorMessage } from '../../../lib/error-message';
 import { useUpdateStudioSettings } from '../api/update-studio-settings';
 import {
   formValuesOf,
@@ -201,11 +202,9 @@ export function SettingsForm({
           setFailure({
             title: 'The settings were not saved',
             messages: [
-              error instanceof ApiError && error.status > 0 && error.status < 500
-                ? error.messages.join(' ')
-                : error instanceof ApiError && error.status === 0
-                  ? error.message
-                  : 'Something went wrong on our side. Your changes are still here: please try again in a moment.',
+              error instanceof ApiError && error.status < 500
+                ? errorMessage(error)
+                : 'Something went wrong on our side. Your changes are still here: please try again in a moment.',
             ],
           });
         }

@@ -6,6 +6,7 @@ import {
   type StudioSettingsBody,
 } from '@nappe/shared';
 import type { FieldError, Resolver } from 'react-hook-form';
+import { placeFieldMessages, type PlacedMessage } from '../../../lib/error-message';
 
 /**
  * The chef's settings form: what the fields hold (text, as typed), how that becomes the API's
@@ -211,29 +212,13 @@ export const settingsResolver: Resolver<SettingsFormValues, unknown, StudioSetti
   return { values: result.data, errors: {} };
 };
 
-/** `lines[2].quantity` → ['lines', 2, 'quantity'] (the API's way of naming a field). */
-export function parseIssuePath(text: string): PropertyKey[] {
-  const path: PropertyKey[] = [];
-  for (const match of text.matchAll(/([^.[\]]+)|\[(\d+)\]/g)) {
-    if (match[2] !== undefined) path.push(Number(match[2]));
-    else if (match[1] !== undefined) path.push(match[1]);
-  }
-  return path;
-}
-
-export interface PlacedMessage {
-  field: string | null;
-  message: string;
-}
-
 /** The API's 400 messages ("depositPercent: The deposit must be 1 % or more."), by form field. */
 export function placeServerMessages(messages: readonly string[]): PlacedMessage[] {
-  return messages.map((text) => {
-    const match = /^([A-Za-z]\w*(?:\.[A-Za-z]\w*|\[\d+\])*): (.+)$/s.exec(text);
-    if (!match) return { field: null, message: text };
-    const field = fieldOf(parseIssuePath(match[1]!));
-    return field ? { field, message: rephrase(field, match[2]!) } : { field: null, message: text };
-  });
+  return placeFieldMessages(messages, fieldOf).map((placed) =>
+    placed.field
+      ? { field: placed.field, message: rephrase(placed.field, placed.message) }
+      : placed,
+  );
 }
 
 /** The policy in words, from the earliest cancellation to the latest; [] while a tier is unreadable. */

@@ -1,14 +1,6 @@
 import { Alert, Button, CloseButton, Dialog, Portal, Stack } from '@chakra-ui/react';
 import { useState, type ReactNode } from 'react';
-import { ApiError } from '../../../lib/api-client';
-
-/** What to tell the chef when the server refused or failed. */
-export function actionFailureMessage(error: unknown): string {
-  if (!(error instanceof ApiError)) return 'Please try again in a moment.';
-  if (error.status === 0) return error.message;
-  if (error.status >= 500) return 'Something went wrong on our side. Please try again in a moment.';
-  return error.messages.join(' ');
-}
+import { errorMessage } from '../../../lib/error-message';
 
 /**
  * Asks before a team change. The trigger opens it; confirming runs `onConfirm`; a refusal from the
@@ -45,7 +37,7 @@ export function ConfirmDialog({
       setOpen(false);
       onDone?.();
     } catch (e) {
-      setError(actionFailureMessage(e));
+      setError(errorMessage(e));
     } finally {
       setPending(false);
     }

@@ -5,8 +5,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { ApiError } from '../../../lib/api-client';
+import { errorMessage, placeFieldMessages } from '../../../lib/error-message';
 import { useCreateInvitation } from '../api/create-invitation';
-import { actionFailureMessage } from './confirm-dialog';
 
 /** The invitation body's rules, from the same shared pieces the API's schema is made of. */
 const invitationFormSchema = z.object({
@@ -17,6 +17,10 @@ const invitationFormSchema = z.object({
 type InvitationForm = z.input<typeof invitationFormSchema>;
 
 const FIELDS = ['name', 'email', 'role'] as const;
+
+/** The form field a server message's path names ("email: …"), or null. */
+const fieldOf = (path: readonly PropertyKey[]) =>
+  (path.length === 1 && FIELDS.find((f) => f === path[0])) || null;
 
 /** Invite someone to the team: the API e-mails them a link that works once, for 7 days. */
 export function InviteForm() {
@@ -46,15 +50,14 @@ export function InviteForm() {
     } catch (error) {
       if (error instanceof ApiError && error.status === 400) {
         const general: string[] = [];
-        for (const text of error.messages) {
-          const match = /^(\w+): (.+)$/s.exec(text);
-          const field = FIELDS.find((f) => f === match?.[1]);
-          if (field && match) setError(field, { type: 'server', message: match[2] });
-          else general.push(text);
+        for (const placed of placeFieldMessages(error.messages, fieldOf)) {
+          const field = FIELDS.find((f) => f === placed.field);
+          if (field) setError(field, { type: 'server', message: placed.message });
+          else general.push(placed.message);
         }
         if (general.length > 0) setFailure(general.join(' '));
       } else {
-        setFailure(actionFailureMessage(error));
+        setFailure(errorMessage(error));
       }
     }
   });

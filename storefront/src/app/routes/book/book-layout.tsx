@@ -1,5 +1,5 @@
 import { Box, Container, Heading, HStack, Stack, Text } from '@chakra-ui/react';
-import { changeGuestCountSchema } from '@nappe/shared';
+import { changeGuestCountSchema, plural } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useEffect, useRef } from 'react';
 import {
@@ -19,7 +19,7 @@ import { eventComplete } from '../../../features/booking/draft/event-schema';
 import { menuQueryOptions, useMenu } from '../../../features/menus/api/get-menu';
 import type { PublicMenu } from '../../../features/menus/api/types';
 import { longDate } from '../../../lib/dates';
-import { money, plural } from '../../../lib/format';
+import { money } from '../../../lib/format';
 import { MENU_NOT_FOUND, warm } from '../../loaders';
 
 export interface BookingOutlet {

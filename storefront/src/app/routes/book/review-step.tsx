@@ -11,7 +11,7 @@ import {
   Stack,
   Text,
 } from '@chakra-ui/react';
-import { createOrderSchema } from '@nappe/shared';
+import { createOrderSchema, plural } from '@nappe/shared';
 import { useState } from 'react';
 import { Link as RouterLink, Navigate, useNavigate } from 'react-router';
 import { Checkbox } from '../../../components/ui/checkbox';
@@ -30,7 +30,6 @@ import { addressLines } from '../../../features/booking/draft/event-schema';
 import { AllergenSummary } from '../../../features/guests/components/allergen-summary';
 import { ApiError } from '../../../lib/api-client';
 import { longDate } from '../../../lib/dates';
-import { plural } from '../../../lib/format';
 import { firstOpenStep, reachableSteps, useBooking } from './book-layout';
 
 const ACCEPT_MESSAGE =

@@ -11,7 +11,7 @@ import {
   Text,
 } from '@chakra-ui/react';
 import { useEffect, useRef, useState } from 'react';
-import { PasswordInput } from '../../../components/ui/password-input';
+import { PasswordInput } from '@nappe/web-kit/auth';
 import { ApiError } from '../../../lib/api-client';
 import { useDeleteAccount, type AccountDeletion } from '../api/delete-account';
 

@@ -1,7 +1,7 @@
 import type { AuthSession, LoginInput } from '@nappe/shared';
+import { authKeys } from '@nappe/web-kit/auth';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { authKeys } from './auth-keys';
 
 export async function login(input: LoginInput): Promise<AuthSession> {
   const session = await api.post<AuthSession>('/auth/login', input, { auth: false });

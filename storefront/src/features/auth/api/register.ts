@@ -1,7 +1,7 @@
 import type { AuthSession, RegisterInput } from '@nappe/shared';
+import { authKeys } from '@nappe/web-kit/auth';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { authKeys } from './auth-keys';
 
 /** Creates a client account and signs it in (the API answers with a session). */
 export async function register(input: RegisterInput): Promise<AuthSession> {

@@ -1,13 +1,15 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button, Field, Input, Stack } from '@chakra-ui/react';
 import { PASSWORD_MIN_LENGTH, registerSchema, type AuthUser } from '@nappe/shared';
+import {
+  describeAuthError,
+  FormErrorAlert,
+  PasswordInput,
+  useCountdown,
+} from '@nappe/web-kit/auth';
 import { useForm } from 'react-hook-form';
-import { PasswordInput } from '../../../components/ui/password-input';
 import { ApiError } from '../../../lib/api-client';
 import { useRegister } from '../api/register';
-import { describeAuthError } from './describe-auth-error';
-import { FormErrorAlert } from './form-error-alert';
-import { useCountdown } from './use-countdown';
 
 export const EMAIL_TAKEN_MESSAGE =
   'An account with this e-mail already exists. Sign in instead, or use another address.';

@@ -1,5 +1,5 @@
 import { Box, chakra, Flex, Heading, HStack, IconButton, List, Text } from '@chakra-ui/react';
-import type { AvailabilityDay, DayStatus, IsoDate } from '@nappe/shared';
+import { plural, type AvailabilityDay, type DayStatus, type IsoDate } from '@nappe/shared';
 import { useEffect, useRef, useState, type KeyboardEvent, type ReactNode } from 'react';
 import {
   ChevronLeftIcon,
@@ -10,7 +10,6 @@ import {
 } from '../../../components/ui/booking-icons';
 import { CheckIcon, PlateIcon } from '../../../components/ui/icons';
 import { longDate } from '../../../lib/dates';
-import { plural } from '../../../lib/format';
 import {
   addMonths,
   compareMonths,

@@ -1,7 +1,6 @@
 import { Box, Heading, HStack, List, Stack, Text } from '@chakra-ui/react';
-import type { Diet, GuestAllergen } from '@nappe/shared';
+import { plural, type Diet, type GuestAllergen } from '@nappe/shared';
 import { FoodAllergenIcon } from '../../../components/ui/allergen-food-icon';
-import { plural } from '../../../lib/format';
 import { allergenLabel, dietLabel, sortAllergens, FORM_DIETS } from '../form/guest-form';
 
 /** A guest as a form holds it or as an order returns it (allergen and diet ids as strings). */

@@ -16,12 +16,12 @@ import {
   DIETS,
   EU_ALLERGEN_GROUPS,
   guestAllergenLabel,
+  plural,
   type GuestRequirement,
 } from '@nappe/shared';
 import { useId, useRef, useState, type ReactNode } from 'react';
 import { DownloadIcon, UploadIcon } from '../../../components/ui/booking-icons';
 import { CheckIcon } from '../../../components/ui/icons';
-import { plural } from '../../../lib/format';
 import {
   GUEST_CSV_COLUMNS,
   GUEST_CSV_MAX_BYTES,

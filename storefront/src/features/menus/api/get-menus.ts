@@ -1,6 +1,6 @@
+import type { Page } from '@nappe/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { Page } from '../../../lib/page';
 import { menuKeys } from './menu-keys';
 import type { PublicMenu } from './types';
 

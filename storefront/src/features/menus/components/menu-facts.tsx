@@ -1,6 +1,7 @@
 import { HStack, Stack, Text } from '@chakra-ui/react';
+import { plural } from '@nappe/shared';
 import { GuestsIcon, CalendarIcon, PlateIcon } from '../../../components/ui/icons';
-import { guestRange, leadTimeInWords, money, plural } from '../../../lib/format';
+import { guestRange, leadTimeInWords, money } from '../../../lib/format';
 import type { PublicMenu } from '../api/types';
 
 /** Price per guest, party size, notice and desserts per guest, in words. */

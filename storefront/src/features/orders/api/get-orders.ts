@@ -1,7 +1,6 @@
-import type { OrderSummary } from '@nappe/shared';
+import type { OrderSummary, Page } from '@nappe/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { Page } from '../../../lib/page';
 import { orderKeys } from './order-keys';
 
 export const ORDERS_PAGE_SIZE = 20;

@@ -1,12 +1,12 @@
 import { Alert, Button, CloseButton, Dialog, Field, Portal, Stack, Text } from '@chakra-ui/react';
-import { REASON_MAX, type OrderDetail } from '@nappe/shared';
+import { plural, REASON_MAX, type OrderDetail } from '@nappe/shared';
 import { useState } from 'react';
 import { Facts } from '../../../components/ui/facts';
 import { LoadError } from '../../../components/ui/query-state';
 import { SkeletonLines } from '../../../components/ui/skeleton';
 import { Textarea } from '../../../components/ui/textarea';
 import { ApiError } from '../../../lib/api-client';
-import { money, plural } from '../../../lib/format';
+import { money } from '../../../lib/format';
 import { useCancelOrder } from '../api/cancel-order';
 import { useCancellationPreview } from '../api/get-cancellation-preview';
 

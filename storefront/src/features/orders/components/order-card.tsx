@@ -1,11 +1,11 @@
 import { Box, Flex, Heading, HStack, Link, Stack, Text } from '@chakra-ui/react';
-import type { OrderSummary } from '@nappe/shared';
+import { plural, type OrderSummary } from '@nappe/shared';
 import { Link as RouterLink } from 'react-router';
 import { ClockIcon } from '../../../components/ui/booking-icons';
 import { CalendarIcon, GuestsIcon } from '../../../components/ui/icons';
 import { paths } from '../../../config/paths';
 import { longDate } from '../../../lib/dates';
-import { money, plural } from '../../../lib/format';
+import { money } from '../../../lib/format';
 import { OrderStatusBadge } from './order-status-badge';
 
 /** What is still owed on an order, in words. */

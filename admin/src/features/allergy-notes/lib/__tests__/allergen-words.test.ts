@@ -1,7 +1,7 @@
 import { checkGuestAgainstDessert, createKitchenIndex, type GuestRequirement } from '@nappe/shared';
 import { describe, expect, it } from 'vitest';
 import { AN_CATALOGUE } from '../../../../testing/allergy-notes-fixtures';
-import { fileNameFrom } from '../../api/download-briefing-pdf';
+import { fileNameFrom } from '../../../../lib/api-client';
 import { advisoryRows, allergenWithFoods, conflictRows } from '../allergen-words';
 
 /**

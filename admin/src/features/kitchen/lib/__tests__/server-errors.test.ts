@@ -79,7 +79,7 @@ describe('saveErrorsOf', () => {
     });
     expect(saveErrorsOf(new ApiError(503, ['Service Unavailable']), fieldOf)).toEqual({
       fields: [],
-      summary: 'Something went wrong on our side. Please try again in a moment.',
+      summary: 'The server ran into a problem. Please try again in a moment.',
     });
     // Status 0: no answer at all (web-kit/src/api-client.ts).
     expect(saveErrorsOf(new ApiError(0, [NETWORK_ERROR_MESSAGE]), fieldOf)).toEqual({

@@ -3,11 +3,11 @@ import { Button, Field, Input, Stack } from '@chakra-ui/react';
 import { emailSchema } from '@nappe/shared';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { ApiError } from '../../../lib/api-client';
-import { useRequestPasswordReset } from '../api/request-password-reset';
-import { describeAuthError } from './describe-auth-error';
-import { FormErrorAlert } from './form-error-alert';
-import { useCountdown } from './use-countdown';
+import { ApiError } from '../api-client.js';
+import { useRequestPasswordReset } from './request-password-reset.js';
+import { describeAuthError } from './describe-auth-error.js';
+import { FormErrorAlert } from './form-error-alert.js';
+import { useCountdown } from './use-countdown.js';
 
 /** The same address rule as sign-in and the API (shared schema). */
 const forgotPasswordSchema = z.object({ email: emailSchema });

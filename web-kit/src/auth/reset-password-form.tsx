@@ -3,12 +3,12 @@ import { Button, Field, Stack } from '@chakra-ui/react';
 import { PASSWORD_MIN_LENGTH, passwordSchema } from '@nappe/shared';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { PasswordInput } from '../../../components/ui/password-input';
-import { ApiError } from '../../../lib/api-client';
-import { useConfirmPasswordReset } from '../api/confirm-password-reset';
-import { describeAuthError } from './describe-auth-error';
-import { FormErrorAlert } from './form-error-alert';
-import { useCountdown } from './use-countdown';
+import { ApiError } from '../api-client.js';
+import { useConfirmPasswordReset } from './confirm-password-reset.js';
+import { describeAuthError } from './describe-auth-error.js';
+import { FormErrorAlert } from './form-error-alert.js';
+import { PasswordInput } from './password-input.js';
+import { useCountdown } from './use-countdown.js';
 
 /** The registration rule, checked here before sending (shared schema); the API judges strength. */
 const resetPasswordSchema = z.object({ password: passwordSchema });

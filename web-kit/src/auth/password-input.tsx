@@ -1,6 +1,6 @@
 import { IconButton, Input, InputGroup, type InputProps } from '@chakra-ui/react';
 import { useState, type Ref } from 'react';
-import { EyeIcon, EyeOffIcon } from './icons';
+import { EyeIcon, EyeOffIcon } from './eye-icons.js';
 
 export interface PasswordInputProps extends Omit<InputProps, 'type'> {
   ref?: Ref<HTMLInputElement>;

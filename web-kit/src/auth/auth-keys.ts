@@ -1,4 +1,4 @@
-/** Query keys of the auth feature; never write these arrays inline. */
+/** Query keys of the account screens, the same in both apps; never write these arrays inline. */
 export const authKeys = {
   all: ['auth'] as const,
   me: () => [...authKeys.all, 'me'] as const,

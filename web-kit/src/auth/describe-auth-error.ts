@@ -1,5 +1,5 @@
-import { ApiError, NETWORK_ERROR_MESSAGE } from '../../../lib/api-client';
-import { formatWait } from './use-countdown';
+import { ApiError, NETWORK_ERROR_MESSAGE } from '../api-client.js';
+import { formatWait } from './use-countdown.js';
 
 export interface ErrorSummary {
   title: string;
