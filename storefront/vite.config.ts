@@ -1,8 +1,9 @@
 import react from '@vitejs/plugin-react';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { defaultClientConditions } from 'vite';
 import { defineConfig } from 'vitest/config';
+import { firstScreenRender } from './server/first-screen-render.js';
 
 const apiProxy = {
   '/api': { target: process.env.API_URL ?? 'http://localhost:3000' },
@@ -38,11 +39,20 @@ const MENUS_UI = new RegExp(
   ].join('|'),
 );
 
+/**
+ * What @nappe/web-kit/auth imports are its peer dependencies. npm installs some of them again under
+ * web-kit/node_modules (@hookform/resolvers): resolved from this app's root, each is bundled once.
+ */
+const webKit = JSON.parse(
+  readFileSync(new URL('../web-kit/package.json', import.meta.url), 'utf8'),
+) as { peerDependencies: Record<string, string> };
+
 export default defineConfig(({ command }) => ({
-  plugins: [react()],
+  plugins: [react(), firstScreenRender()],
   resolve: {
     // Read @nappe/shared from its TypeScript source: no prior build of shared is needed.
     conditions: ['@nappe/source', ...defaultClientConditions],
+    dedupe: Object.keys(webKit.peerDependencies),
     alias: [
       { find: /^@chakra-ui\/react\/theme\/(.+)$/, replacement: `${chakraTheme}$1.js` },
       ...(command === 'build'
@@ -82,6 +92,10 @@ export default defineConfig(({ command }) => ({
           // package.json cannot say so to a bundler reading its source: without this, importing
           // one schema would carry the whole kitchen library (demo catalogue, mix balance…) along.
           { test: /[\\/]shared[\\/]src[\\/]/, sideEffects: false },
+          // The same for @nappe/web-kit: its entry points re-export every module, and the entry
+          // imports @nappe/web-kit/auth for the query keys; said so, the forgot/reset forms, zod
+          // and react-hook-form stay in the lazy screens that use them.
+          { test: /[\\/]web-kit[\\/]src[\\/]/, sideEffects: false },
           // CommonJS that only defines functions, which only Emotion's withTheme (unused here)
           // calls: said so, the bundler leaves them out instead of running them at startup.
           {

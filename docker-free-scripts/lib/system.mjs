@@ -128,20 +128,23 @@ export function startSystem(config, { quiet = false, live = false, env = {} } = 
   const sharedEnv = systemEnv(config, env);
   const vite = join(ROOT, 'node_modules', 'vite', 'bin', 'vite.js');
   const serve = live ? '' : ' preview';
+  // The built apps' servers render Menus per request with React: its production build is 2–4×
+  // faster than the development one (the API keeps the demo's development settings).
+  const appEnv = live ? sharedEnv : { ...sharedEnv, NODE_ENV: 'production' };
   const commands = [
     { name: 'api', command: 'node api/dist/main.js', env: sharedEnv, prefixColor: 'magenta' },
     {
       name: 'storefront',
       command: `node ${vite}${serve} --port ${config.ports.storefront} --strictPort`,
       cwd: join(ROOT, 'storefront'),
-      env: sharedEnv,
+      env: appEnv,
       prefixColor: 'yellow',
     },
     {
       name: 'admin',
       command: `node ${vite}${serve} --port ${config.ports.admin} --strictPort`,
       cwd: join(ROOT, 'admin'),
-      env: sharedEnv,
+      env: appEnv,
       prefixColor: 'green',
     },
     {

@@ -1,13 +1,12 @@
+import type { Page } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
-import { GRID_PHOTO_SIZES, preloadPhoto } from '../components/ui/photo-source';
 import { menuQueryOptions } from '../features/menus/api/get-menu';
 import { MENUS_PAGE_SIZE, menusPath, menusQueryOptions } from '../features/menus/api/get-menus';
 import type { PublicMenu } from '../features/menus/api/types';
-import { cardPhoto } from '../features/menus/components/card-photo';
 import { STUDIO_PATH, studioQueryOptions } from '../features/studio/api/get-studio';
 import { preloadPublicGet } from '../lib/api-client';
-import { pageFromSearch, type Page } from '../lib/page';
+import { pageFromSearch } from '../lib/page';
 import { MENU_NOT_FOUND, warm } from './loaders';
 
 /**
@@ -17,10 +16,12 @@ import { MENU_NOT_FOUND, warm } from './loaders';
  */
 export interface ScreenLoaderOptions {
   /**
-   * True while the page on screen is the one rendered at build time, before React has taken it
-   * over. React must first render exactly that markup, which shows no data: the loaders then
-   * wait for nothing and put nothing in the cache (first-screen.ts has already asked for the
-   * data; the screens' queries receive the answers once React has taken over).
+   * True while the page on screen is one the server sent already rendered, before React has
+   * taken it over. React must first render exactly that markup, so the loaders wait for nothing
+   * and put nothing in the cache: markup rendered at build time shows no data (first-screen.ts
+   * has already asked for it; the screens' queries receive the answers once React has taken
+   * over); markup rendered per request shows the answers it came with, which start-app.tsx has
+   * put in the cache.
    */
   showingPrebuiltPage?: () => boolean;
 }
@@ -44,16 +45,14 @@ export function preloadHome(): void {
   preloadPublicGet(menusPath(1, FEATURED_MENUS));
 }
 
-/** The page of menus, and the first card's photo (the page's largest image) once known. */
+/**
+ * The page of menus. Its first photo is not preloaded from here: the preview server renders Menus
+ * with its data (storefront/server), so the <img> is in the HTML before any script runs; on the
+ * build-time fallback the photo waits for the cards (the entry stays within its 150 KiB budget).
+ */
 export function preloadMenus(url: URL): void {
   const page = pageFromSearch(url.searchParams.get('page'));
-  void preloadPublicGet<Page<PublicMenu>>(menusPath(page, MENUS_PAGE_SIZE))?.then(
-    ({ items }) => {
-      const photo = items[0] && cardPhoto(items[0]);
-      if (photo) preloadPhoto(photo, GRID_PHOTO_SIZES);
-    },
-    () => undefined,
-  );
+  preloadPublicGet<Page<PublicMenu>>(menusPath(page, MENUS_PAGE_SIZE));
 }
 
 export const layoutLoader =

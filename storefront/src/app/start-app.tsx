@@ -1,23 +1,26 @@
-import type { QueryClient } from '@tanstack/react-query';
+import type { QueryClient, QueryKey } from '@tanstack/react-query';
 import { createRoot, hydrateRoot, type Root, type RootOptions } from 'react-dom/client';
 import { createBrowserRouter, type DataRouter } from 'react-router';
 import { OTHER_PAGE_ATTRIBUTE, PREBUILT_PATH_ATTRIBUTE } from '../config/prebuilt';
 import { createQueryClient } from '../lib/query-client';
 import { App, routerInitialized } from './app';
+import { firstScreenData } from './first-screen';
 import { createRoutes } from './router';
 
 export interface StartedApp {
   root: Root;
   router: DataRouter;
   queryClient: QueryClient;
-  /** Whether React took over markup rendered at build time rather than drawing the page. */
+  /** Whether React took over markup the server sent rather than drawing the page. */
   hydrated: boolean;
 }
 
 /**
- * Starts the storefront in `container`. Home and Menus arrive as HTML rendered at build time
- * (scripts/prerender.mjs), so they show before any script has run: React then takes that
- * markup over (hydrates it) instead of drawing the page again. Any other page starts empty.
+ * Starts the storefront in `container`. Home and Menus arrive as HTML already rendered, so they
+ * show before any script has run: by the server per request with their data
+ * (server/first-screen-render.ts), else at build time in their loading state
+ * (scripts/prerender.mjs). React then takes that markup over (hydrates it) instead of drawing
+ * the page again. Any other page starts empty.
  */
 export async function startApp(
   container: HTMLElement,
@@ -27,6 +30,13 @@ export async function startApp(
     container.getAttribute(PREBUILT_PATH_ATTRIBUTE) === window.location.pathname;
 
   const queryClient = createQueryClient();
+  // The answers the server rendered this markup with, if it did: in the cache before the first
+  // render, so that React renders the same markup and no screen asks for them again.
+  const answers = showingPrebuiltPage && firstScreenData();
+  if (answers) {
+    for (const [key, data] of JSON.parse(answers.textContent!) as [QueryKey, unknown][])
+      queryClient.setQueryData(key, data);
+  }
   // Made before the first render, so the screen's code and data start loading at once.
   const router = createBrowserRouter(
     createRoutes(queryClient, { showingPrebuiltPage: () => showingPrebuiltPage }),
