@@ -237,7 +237,7 @@ async function startPreview({ cwd, port, env = {}, args = [] }) {
   const child = spawn(
     process.execPath,
     [vite, 'preview', ...args, '--port', String(port), '--strictPort', '--host', '127.0.0.1'],
-    { cwd, env: { ...process.env, ...env }, stdio: 'ignore' },
+    { cwd, env: { ...process.env, NODE_ENV: 'production', ...env }, stdio: 'ignore' },
   );
   const exited = new Promise((resolve) => child.once('exit', resolve));
   const deadline = Date.now() + 30_000;
