@@ -1,5 +1,4 @@
 import react from '@vitejs/plugin-react';
-import { readFileSync } from 'node:fs';
 import { defaultClientConditions } from 'vite';
 import { defineConfig } from 'vitest/config';
 
@@ -7,20 +6,14 @@ const apiProxy = {
   '/api': { target: process.env.API_URL ?? 'http://localhost:3000' },
 };
 
-/**
- * What @nappe/web-kit/auth imports are its peer dependencies. npm installs some of them again under
- * web-kit/node_modules (@hookform/resolvers): resolved from this app's root, each is bundled once.
- */
-const webKit = JSON.parse(
-  readFileSync(new URL('../web-kit/package.json', import.meta.url), 'utf8'),
-) as { peerDependencies: Record<string, string> };
-
 export default defineConfig({
   plugins: [react()],
   resolve: {
     // Read @nappe/shared from its TypeScript source: no prior build of shared is needed.
     conditions: ['@nappe/source', ...defaultClientConditions],
-    dedupe: Object.keys(webKit.peerDependencies),
+    // npm installs @hookform/resolvers again under web-kit/node_modules: resolved from here, it is
+    // bundled once (only that package: deduping React and Chakra too broke a storefront checkbox).
+    dedupe: ['@hookform/resolvers'],
   },
   build: {
     rolldownOptions: {

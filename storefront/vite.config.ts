@@ -1,5 +1,5 @@
 import react from '@vitejs/plugin-react';
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { defaultClientConditions } from 'vite';
 import { defineConfig } from 'vitest/config';
@@ -39,20 +39,15 @@ const MENUS_UI = new RegExp(
   ].join('|'),
 );
 
-/**
- * What @nappe/web-kit/auth imports are its peer dependencies. npm installs some of them again under
- * web-kit/node_modules (@hookform/resolvers): resolved from this app's root, each is bundled once.
- */
-const webKit = JSON.parse(
-  readFileSync(new URL('../web-kit/package.json', import.meta.url), 'utf8'),
-) as { peerDependencies: Record<string, string> };
-
 export default defineConfig(({ command }) => ({
   plugins: [react(), firstScreenRender()],
   resolve: {
     // Read @nappe/shared from its TypeScript source: no prior build of shared is needed.
     conditions: ['@nappe/source', ...defaultClientConditions],
-    dedupe: Object.keys(webKit.peerDependencies),
+    // npm installs @hookform/resolvers again under web-kit/node_modules: resolved from here, it is
+    // bundled once. Only that package: deduping all of web-kit's peers (Chakra, React included)
+    // resolved them from another folder and left the booking terms' checkbox unable to change.
+    dedupe: ['@hookform/resolvers'],
     alias: [
       { find: /^@chakra-ui\/react\/theme\/(.+)$/, replacement: `${chakraTheme}$1.js` },
       ...(command === 'build'
