@@ -85,10 +85,18 @@ export async function createTestDatabase(): Promise<TestDatabase> {
     target: { type: 'postgres', url: url.href, dataPath },
     env: { DB_TYPE: 'postgres', DATABASE_URL: url.href, DATABASE_PATH: dataPath },
     drop: async () => {
-      // WITH (FORCE) ends any session still connected (PostgreSQL 13+).
-      await withAdminClient(adminUrl, (c) =>
-        c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`),
-      );
+      await withAdminClient(adminUrl, async (c) => {
+        try {
+          // A plain drop: the app has closed its pool, and PostgreSQL cancels an autovacuum
+          // worker in the database itself. WITH (FORCE) would need the right to signal that
+          // worker, which a CREATEDB role lacks (pg_signal_backend), so it comes second.
+          await c.query(`DROP DATABASE IF EXISTS "${name}"`);
+        } catch (error) {
+          // 55006 object_in_use: a session is still connected (a test that left one open).
+          if ((error as { code?: string }).code !== '55006') throw error;
+          await c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
+        }
+      });
       rmSync(dir, { recursive: true, force: true });
     },
   };
