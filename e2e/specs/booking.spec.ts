@@ -1,4 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
+import { tick } from '../support/checkbox';
 import { snap, urls } from '../support/env';
 
 const mailUrl = process.env.NAPPE_MAIL_URL ?? 'http://localhost:1080';
@@ -53,7 +54,7 @@ async function fillGuests(page: Page) {
     await page.getByRole('button', { name: /Add a guest with requirements/ }).click();
     const label_ = page.getByLabel('Name or label').last();
     await label_.fill(label);
-    await page.getByRole('checkbox', { name: allergen, exact: true }).last().check({ force: true });
+    await tick(page.getByRole('checkbox', { name: allergen, exact: true }).last());
   }
   await page.getByLabel('Choose a CSV file').setInputFiles({
     name: 'guests.csv',
@@ -64,7 +65,7 @@ async function fillGuests(page: Page) {
   });
   await page.getByRole('button', { name: /Add 1 guest to the list/ }).click();
   await expect(page.getByRole('region', { name: 'Summary by allergen' })).toBeVisible();
-  await page.getByRole('checkbox', { name: /My guests agreed to share/ }).check({ force: true });
+  await tick(page.getByRole('checkbox', { name: /My guests agreed to share/ }));
   await snap(page, 'storefront-booking-guests');
   await page.getByRole('button', { name: /Continue to review/ }).click();
 }
@@ -85,7 +86,8 @@ test('a new client books 40 guests, pays the deposit with 4242…, sees it recor
 
   // Review: the server's quote, the tiers in words, the terms.
   await expect(page.getByText(/deposit/i).first()).toBeVisible();
-  await page.getByRole('checkbox', { name: /accept/i }).check({ force: true });
+  await expect(page.getByRole('region', { name: 'The full booking terms' })).toBeVisible();
+  await tick(page.getByRole('checkbox', { name: /accept/i }));
   await snap(page, 'storefront-booking-review');
   await page.getByRole('button', { name: /Continue to payment/ }).click();
 

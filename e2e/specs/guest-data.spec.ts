@@ -1,5 +1,6 @@
 import { readFile } from 'node:fs/promises';
 import { expect, test, type Page } from '@playwright/test';
+import { tick } from '../support/checkbox';
 import { snap, urls } from '../support/env';
 
 /**
@@ -49,7 +50,7 @@ async function startBooking(page: Page) {
 async function addGuest(page: Page, label: string, allergen: string) {
   await page.getByRole('button', { name: /Add a guest with requirements/ }).click();
   await page.getByLabel('Name or label').last().fill(label);
-  await page.getByRole('checkbox', { name: allergen, exact: true }).last().check({ force: true });
+  await tick(page.getByRole('checkbox', { name: allergen, exact: true }).last());
 }
 
 /** Books 12 guests on the first open date of a demo menu, as the signed-in client. */
@@ -113,7 +114,7 @@ test('the consent confirmation blocks the guest step until it is ticked', async 
   await expectSoon(page).toHaveURL(/\/guests$/);
   await snap(page, 'storefront-guests-consent-required');
 
-  await consent.check({ force: true });
+  await tick(consent);
   await page.getByRole('button', { name: /Continue to review/ }).click();
   await expectSoon(page).toHaveURL(/\/review$/);
 });
