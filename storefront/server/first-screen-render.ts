@@ -8,13 +8,15 @@
 // Only public data is ever rendered: the API's public GETs, asked for without the visitor's
 // cookies or Authorization. When the API is slow, down or answers an error, the build-time page
 // (dist/menus.html: the loading state, no data) is served as before.
-import { createHash } from 'node:crypto';
+//
+// Only the render is ours. The page is sent as the preview server sends its built HTML (Vite's
+// `send`: weak ETag, 304, `Cache-Control: no-cache`, HEAD), and Vite's compression, which gzips
+// every answer of the middlewares after it, gzips it.
 import { existsSync, readFileSync } from 'node:fs';
-import type { IncomingMessage, OutgoingHttpHeaders, ServerResponse } from 'node:http';
+import type { IncomingMessage, OutgoingHttpHeaders } from 'node:http';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { gzipSync } from 'node:zlib';
-import type { Plugin, ProxyOptions } from 'vite';
+import { send, type Connect, type Plugin, type ProxyOptions } from 'vite';
 import type {
   API_BASE_PATH,
   FirstScreenAnswer,
@@ -66,15 +68,7 @@ export interface FirstScreenOptions {
   now?: () => number;
 }
 
-interface RenderedPage {
-  body: Buffer;
-  gzip: Buffer;
-  etag: string;
-}
-
-type Middleware = (req: IncomingMessage, res: ServerResponse, next: () => void) => void;
-
-export interface FirstScreenMiddleware extends Middleware {
+export interface FirstScreenMiddleware extends Connect.NextHandleFunction {
   /**
    * Renders the page at `url` once for nobody (kept for nobody, never logged), so that the first
    * visitor does not wait for the render's code to load and warm up: about a second on this
@@ -97,7 +91,7 @@ export function firstScreenMiddleware({
   onFallback = () => undefined,
   now = Date.now,
 }: FirstScreenOptions): FirstScreenMiddleware {
-  const kept = new Map<string, { at: number; page: Promise<RenderedPage | null> }>();
+  const kept = new Map<string, { at: number; page: Promise<string | null> }>();
   let rendering = 0;
 
   async function ask(query: FirstScreenQuery, signal: AbortSignal): Promise<FirstScreenAnswer> {
@@ -117,21 +111,17 @@ export function firstScreenMiddleware({
     return Promise.all(queries.map((query) => ask(query, signal)));
   }
 
-  async function render(url: string, queries: FirstScreenQuery[]): Promise<RenderedPage | null> {
+  async function render(url: string, queries: FirstScreenQuery[]): Promise<string | null> {
     try {
       const answers = await answersTo(queries);
-      const { html } = await renderer.renderDocument(template, url, answers);
-      const body = Buffer.from(html);
-      const hash = createHash('sha256').update(body).digest('base64url').slice(0, 27);
-      // Weak: the same page whether sent gzipped or not (RFC 9110, 8.8.3).
-      return { body, gzip: gzipSync(body), etag: `W/"${hash}"` };
+      return (await renderer.renderDocument(template, url, answers)).html;
     } catch (error) {
       onFallback(url, error);
       return null;
     }
   }
 
-  function pageFor(url: string, queries: FirstScreenQuery[]): Promise<RenderedPage | null> {
+  function pageFor(url: string, queries: FirstScreenQuery[]): Promise<string | null> {
     const at = now();
     for (const [key, entry] of kept) if (at - entry.at >= keptMs) kept.delete(key);
     const hit = kept.get(url);
@@ -149,31 +139,10 @@ export function firstScreenMiddleware({
     return page;
   }
 
-  function send(req: IncomingMessage, res: ServerResponse, page: RenderedPage) {
-    for (const [name, value] of Object.entries(headers)) {
-      if (value !== undefined) res.setHeader(name, value);
-    }
-    res.setHeader('Content-Type', 'text/html; charset=utf-8');
-    // Asked for again on every visit (answered 304 while unchanged): the page holds the chef's
-    // current menus and the names of this build's scripts, so no copy may be used unchecked.
-    res.setHeader('Cache-Control', 'no-cache');
-    res.setHeader('ETag', page.etag);
-    res.setHeader('Vary', 'Accept-Encoding');
-    if (matchesEtag(req.headers['if-none-match'], page.etag)) {
-      res.statusCode = 304;
-      res.end();
-      return;
-    }
-    const gzip = /\bgzip\b/.test(String(req.headers['accept-encoding'] ?? ''));
-    const body = gzip ? page.gzip : page.body;
-    if (gzip) res.setHeader('Content-Encoding', 'gzip');
-    res.setHeader('Content-Length', body.length);
-    res.statusCode = 200;
-    res.end(req.method === 'HEAD' ? undefined : body);
-  }
-
-  const handle: Middleware = (req, res, next) => {
-    const address = req.url ?? '';
+  const handle: Connect.NextHandleFunction = (req, res, next) => {
+    // As asked for: Vite's HTML fallback, before this middleware, has rewritten req.url
+    // (`/menus?page=2` to `/menus.html`).
+    const address = req.originalUrl ?? req.url ?? '';
     if (
       (req.method !== 'GET' && req.method !== 'HEAD') ||
       !acceptsHtml(req) ||
@@ -186,7 +155,15 @@ export function firstScreenMiddleware({
     const queries = renderer.firstScreenQueries(url);
     if (!queries) return next();
     pageFor(url.pathname + url.search, queries).then(
-      (page) => (page ? send(req, res, page) : next()),
+      (page) => {
+        if (!page) return next();
+        // Vite's compression answers gzip or not by Accept-Encoding but does not say so; a cache
+        // between here and the browser must know (RFC 9110, 12.5.5).
+        res.setHeader('Vary', 'Accept-Encoding');
+        // `Cache-Control: no-cache` (send's default): asked for again on every visit, 304 while
+        // unchanged, as the page holds the chef's current menus and this build's script names.
+        send(req, res, page, 'text/html; charset=utf-8', { headers });
+      },
       () => next(),
     );
   };
@@ -206,13 +183,6 @@ export function firstScreenMiddleware({
 function acceptsHtml(req: IncomingMessage): boolean {
   const accept = req.headers.accept;
   return !accept || accept.includes('text/html') || accept.includes('*/*');
-}
-
-/** If-None-Match by weak comparison (RFC 9110, 13.1.2): `*`, or any listed tag equal to ours. */
-function matchesEtag(ifNoneMatch: string | undefined, etag: string): boolean {
-  if (!ifNoneMatch) return false;
-  const opaque = (tag: string) => tag.trim().replace(/^W\//, '');
-  return ifNoneMatch.split(',').some((tag) => tag.trim() === '*' || opaque(tag) === opaque(etag));
 }
 
 /** An error's message, with its cause's (fetch says "fetch failed", its cause says why). */
@@ -265,12 +235,15 @@ export function firstScreenRender(): Plugin {
             timestamp: true,
           }),
       });
-      server.middlewares.use(middleware);
       server.httpServer.once('listening', () => {
         void (async () => {
           for (const page of renderer.PREBUILT_PAGES) await middleware.warm(page.path);
         })();
       });
+      // Returned, it is added after Vite's own middlewares (proxy, compression, static files, HTML
+      // fallback), so that its compression carries the page; before Vite's index.html, which
+      // sends the build-time page when this middleware passes the request on.
+      return () => server.middlewares.use(middleware);
     },
   };
 }
