@@ -33,7 +33,7 @@ for (const path of [chakraTheme, reactRouterProduction]) {
 const MENUS_UI = new RegExp(
   [
     String.raw`[\\/]src[\\/]features[\\/]menus[\\/]components[\\/]`,
-    String.raw`[\\/]src[\\/]components[\\/]ui[\\/](allergen-icons|booking-icons|icons|icon-stroke|photo|plate-illustration|query-state|skeleton|text-link)\.tsx?$`,
+    String.raw`[\\/]src[\\/]components[\\/]ui[\\/](allergen-icons|booking-icons|icons|photo|plate-illustration|query-state|skeleton|text-link)\.tsx?$`,
     String.raw`[\\/]src[\\/]lib[\\/]format\.ts$`,
     String.raw`[\\/]@chakra-ui[\\/]react[\\/]dist[\\/]esm[\\/]components[\\/](alert|card|empty-state|grid|list|simple-grid|skeleton)[\\/]`,
   ].join('|'),

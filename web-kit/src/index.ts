@@ -1,2 +1,3 @@
 export * from './api-client.js';
+export * from './icon-stroke.js';
 export * from './save-file.js';

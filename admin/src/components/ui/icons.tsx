@@ -1,13 +1,7 @@
 import { createIcon } from '@chakra-ui/react';
+import { iconStroke as stroke } from '@nappe/web-kit';
 
 // Line icons of our own, drawn on a 24-unit grid with a 1.75 stroke.
-const stroke = {
-  fill: 'none',
-  stroke: 'currentColor',
-  strokeWidth: 1.75,
-  strokeLinecap: 'round',
-  strokeLinejoin: 'round',
-} as const;
 
 export const SpoonIcon = /* @__PURE__ */ createIcon({
   displayName: 'SpoonIcon',

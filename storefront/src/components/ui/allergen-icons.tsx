@@ -1,5 +1,6 @@
 import { Icon, type IconProps } from '@chakra-ui/react';
 import type { EuAllergenGroup } from '@nappe/shared';
+import { iconStroke as s } from '@nappe/web-kit';
 import type { ReactNode } from 'react';
 
 /*
@@ -8,14 +9,6 @@ import type { ReactNode } from 'react';
  * allergen's name: an icon is a reading aid, never the only way an allergen is shown.
  * Kept apart from icons.tsx so that only the screens that show allergens load them.
  */
-
-const s = {
-  fill: 'none',
-  stroke: 'currentColor',
-  strokeWidth: 1.75,
-  strokeLinecap: 'round',
-  strokeLinejoin: 'round',
-} as const;
 
 const seed = 'M0-3.6c1.7 1.7 1.9 4.5 0 7.2-1.9-2.7-1.7-5.5 0-7.2Z';
 

@@ -1,17 +1,11 @@
 import { createIcon } from '@chakra-ui/react';
+import { iconStroke as stroke } from '@nappe/web-kit';
 
 /*
  * Line icons of our own for the booking screens, on the same 24-unit grid and 1.75 stroke as
  * icons.tsx. A separate module from icons.tsx (which the entry loads for the header), so that
  * these travel with the lazy screens that use them. Each is decorative: text always goes with it.
  */
-const stroke = {
-  fill: 'none',
-  stroke: 'currentColor',
-  strokeWidth: 1.75,
-  strokeLinecap: 'round',
-  strokeLinejoin: 'round',
-} as const;
 
 export const ChevronLeftIcon = /* @__PURE__ */ createIcon({
   displayName: 'ChevronLeftIcon',

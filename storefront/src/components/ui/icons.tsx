@@ -1,5 +1,5 @@
 import { createIcon } from '@chakra-ui/react';
-import { stroke } from './icon-stroke';
+import { iconStroke as stroke } from '@nappe/web-kit';
 
 // Line icons of our own, drawn on a 24-unit grid with a 1.75 stroke. The spoon of the wordmark
 // is drawn in wordmark.tsx: the header, on every page, then loads only that one.

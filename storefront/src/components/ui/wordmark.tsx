@@ -1,5 +1,5 @@
 import { createIcon, HStack, Text } from '@chakra-ui/react';
-import { stroke } from './icon-stroke';
+import { iconStroke as stroke } from '@nappe/web-kit';
 
 /** A spoon coated with a drop of custard: the "nappe" that names the product. */
 export const SpoonIcon = /* @__PURE__ */ createIcon({

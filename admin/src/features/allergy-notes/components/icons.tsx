@@ -1,14 +1,8 @@
 import { createIcon } from '@chakra-ui/react';
+import { iconStroke as stroke } from '@nappe/web-kit';
 
 // Line icons of our own for the allergy notes, on the same 24-unit grid and 1.75 stroke as
 // components/ui/icons.tsx.
-const stroke = {
-  fill: 'none',
-  stroke: 'currentColor',
-  strokeWidth: 1.75,
-  strokeLinecap: 'round',
-  strokeLinejoin: 'round',
-} as const;
 
 /** A tick in a circle: the plate the guest gets has nothing that conflicts. */
 export const ClearIcon = /* @__PURE__ */ createIcon({

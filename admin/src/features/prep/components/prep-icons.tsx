@@ -1,13 +1,7 @@
 import { createIcon } from '@chakra-ui/react';
+import { iconStroke as stroke } from '@nappe/web-kit';
 
 // Line icons of our own on the app's 24-unit grid, 1.75 stroke (see components/ui/icons.tsx).
-const stroke = {
-  fill: 'none',
-  stroke: 'currentColor',
-  strokeWidth: 1.75,
-  strokeLinecap: 'round',
-  strokeLinejoin: 'round',
-} as const;
 
 /** A snowflake of three crossed strokes with small barbs: frozen storage. */
 export const FrozenIcon = /* @__PURE__ */ createIcon({
