@@ -3,6 +3,7 @@
 // Menus also per request, with its public data (server/first-screen-render.ts, which imports the
 // SSR bundle of this file that scripts/prerender.mjs keeps in server/dist). Never shipped to the
 // browser, which hydrates this markup (start-app.tsx).
+import { createQueryClient } from '@nappe/web-kit/react';
 import type { QueryKey } from '@tanstack/react-query';
 import { renderToString } from 'react-dom/server';
 import { createMemoryRouter } from 'react-router';
@@ -18,7 +19,6 @@ import {
 import { MENUS_PAGE_SIZE, menusPath, menusQueryOptions } from './features/menus/api/get-menus';
 import { STUDIO_PATH, studioQueryOptions } from './features/studio/api/get-studio';
 import { pageFromSearch } from './lib/page';
-import { createQueryClient } from './lib/query-client';
 
 export { OTHER_PAGE_ATTRIBUTE, PREBUILT_PAGES, PREBUILT_PATH_ATTRIBUTE } from './config/prebuilt';
 

@@ -1,7 +1,7 @@
+import { PageLoader } from '@nappe/web-kit/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { createBrowserRouter, redirect, RouterProvider, type RouteObject } from 'react-router';
-import { PageLoader } from '../components/ui/page-loader';
 import { paths } from '../config/paths';
 import { guestOnlyLoader, requireTeamMemberLoader } from './guards';
 import { ErrorPage } from './routes/error-page';

@@ -1,6 +1,6 @@
+import { PageLoader } from '@nappe/web-kit/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { Navigate, type RouteObject } from 'react-router';
-import { PageLoader } from '../components/ui/page-loader';
 import { paths } from '../config/paths';
 import { homeScreen, menusScreen, screenRecipes } from './first-screen';
 import { guestOnlyLoader, requireUserLoader } from './guards';

@@ -2,7 +2,10 @@ import type { QueryClient, QueryKey } from '@tanstack/react-query';
 import { createRoot, hydrateRoot, type Root, type RootOptions } from 'react-dom/client';
 import { createBrowserRouter, type DataRouter } from 'react-router';
 import { OTHER_PAGE_ATTRIBUTE, PREBUILT_PATH_ATTRIBUTE } from '../config/prebuilt';
-import { createQueryClient } from '../lib/query-client';
+// Kept after react-dom, not sorted to the top: the bundle lays modules out in first-import order,
+// and this entry (it also exports Chakra parts) placed before React DOM makes the startup script
+// compress about 0.9 KiB worse.
+import { createQueryClient } from '@nappe/web-kit/react';
 import { App, routerInitialized } from './app';
 import { firstScreenData } from './first-screen';
 import { createRoutes } from './router';

@@ -1,9 +1,9 @@
+import { createQueryClient } from '@nappe/web-kit/react';
 import { render } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { AppProvider } from '../app/provider';
 import { createRoutes } from '../app/router';
-import { createQueryClient } from '../lib/query-client';
 
 /** Renders the whole app, as the browser would, at `url`. */
 export function renderApp(url: string) {

@@ -14,11 +14,12 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { ChevronLeftIcon, ChevronRightIcon } from '../../components/ui/icons';
+import { LoadError } from '../../components/ui/load-error';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { RequireRole } from '../../features/auth/components/require-role';
-import { BlockSkeleton, LoadError } from '../../features/kitchen/components/load-states';
+import { BlockSkeleton } from '../../features/kitchen/components/load-states';
 import {
   calendarSettingsQueryOptions,
   useCalendarSettings,

@@ -3,6 +3,7 @@ import { Role } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link as RouterLink } from 'react-router';
 import { InboxIcon } from '../../components/ui/icons';
+import { LoadError } from '../../components/ui/load-error';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
@@ -20,7 +21,7 @@ import {
 } from '../../features/insights/components/insights-charts';
 import { formatDayLong } from '../../features/insights/lib/format';
 import { isEmptyDashboard } from '../../features/insights/lib/summaries';
-import { BlockSkeleton, LoadError } from '../../features/kitchen/components/load-states';
+import { BlockSkeleton } from '../../features/kitchen/components/load-states';
 
 /** Starts the figures loading while the screen's code (and recharts) arrives — for the chef only. */
 export const insightsLoader = (queryClient: QueryClient) => async () => {

@@ -13,11 +13,10 @@ import {
   Text,
 } from '@chakra-ui/react';
 import type { AuthUser } from '@nappe/shared';
+import { NavigationProgress, PageLoader } from '@nappe/web-kit/react';
 import { useState } from 'react';
 import { Navigate, NavLink, Outlet, useLocation } from 'react-router';
 import { MenuIcon } from '../../components/ui/icons';
-import { NavigationProgress } from '../../components/ui/navigation-progress';
-import { PageLoader } from '../../components/ui/page-loader';
 import { RoleBadge } from '../../components/ui/role-badge';
 import { Wordmark } from '../../components/ui/wordmark';
 import { paths } from '../../config/paths';

@@ -5,7 +5,6 @@ import {
   ButtonGroup,
   Card,
   Container,
-  EmptyState,
   Flex,
   Heading,
   IconButton,
@@ -19,10 +18,12 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { ChevronLeftIcon, ChevronRightIcon, GuestsIcon } from '../../components/ui/icons';
+import { LoadError } from '../../components/ui/load-error';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { RequireRole } from '../../features/auth/components/require-role';
+import { KitchenEmpty } from '../../features/kitchen/components/load-states';
 import { useStudio } from '../../features/studio/api/get-studio';
 import { USERS_PAGE_SIZE, usersQueryOptions, useUsers } from '../../features/users/api/get-users';
 import { invitationsQueryOptions, useInvitations } from '../../features/users/api/invitations';
@@ -30,7 +31,6 @@ import { InvitationsList } from '../../features/users/components/invitations-lis
 import { InviteForm } from '../../features/users/components/invite-form';
 import { MemberActions } from '../../features/users/components/member-actions';
 import { UsersTable, UsersTableSkeleton } from '../../features/users/components/users-table';
-import { errorMessage } from '../../lib/error-message';
 
 function pageFrom(value: string | null): number {
   const page = Number(value);
@@ -100,21 +100,11 @@ function PendingInvitations({ timeZone }: { timeZone?: string }) {
   }
   if (invitations.isError) {
     return (
-      <Alert.Root status="error" role="alert" borderRadius="l2">
-        <Alert.Indicator />
-        <Alert.Content gap="3">
-          <Alert.Title>The pending invitations could not be loaded</Alert.Title>
-          <Button
-            size="sm"
-            variant="outline"
-            alignSelf="start"
-            loading={invitations.isFetching}
-            onClick={() => void invitations.refetch()}
-          >
-            Try again
-          </Button>
-        </Alert.Content>
-      </Alert.Root>
+      <LoadError
+        title="The pending invitations could not be loaded"
+        onRetry={() => void invitations.refetch()}
+        retrying={invitations.isFetching}
+      />
     );
   }
   return <InvitationsList invitations={invitations.data} timeZone={timeZone} />;
@@ -182,42 +172,16 @@ function Team({ currentUserId }: { currentUserId: string }) {
             {users.isPending ? (
               <UsersTableSkeleton withActions />
             ) : users.isError ? (
-              <Alert.Root status="error" role="alert" borderRadius="l2">
-                <Alert.Indicator />
-                <Alert.Content gap="3">
-                  <Alert.Title>The list of accounts could not be loaded</Alert.Title>
-                  <Alert.Description>{errorMessage(users.error)}</Alert.Description>
-                  <Button
-                    size="sm"
-                    variant="outline"
-                    alignSelf="start"
-                    loading={users.isFetching}
-                    onClick={() => void users.refetch()}
-                  >
-                    Try again
-                  </Button>
-                </Alert.Content>
-              </Alert.Root>
+              <LoadError
+                title="The list of accounts could not be loaded"
+                error={users.error}
+                onRetry={() => void users.refetch()}
+                retrying={users.isFetching}
+              />
             ) : users.data.total === 0 ? (
-              <EmptyState.Root
-                borderWidth="1px"
-                borderStyle="dashed"
-                borderColor="border.emphasized"
-                borderRadius="l3"
-                bg="bg.panel"
-              >
-                <EmptyState.Content>
-                  <EmptyState.Indicator color="caramel.fg">
-                    <GuestsIcon />
-                  </EmptyState.Indicator>
-                  <EmptyState.Title fontFamily="heading" textStyle="xl">
-                    No accounts yet
-                  </EmptyState.Title>
-                  <EmptyState.Description color="fg.muted" textAlign="center" maxW="md">
-                    Team members and clients will be listed here once they have accounts.
-                  </EmptyState.Description>
-                </EmptyState.Content>
-              </EmptyState.Root>
+              <KitchenEmpty icon={<GuestsIcon />} title="No accounts yet">
+                Team members and clients will be listed here once they have accounts.
+              </KitchenEmpty>
             ) : users.data.items.length === 0 ? (
               <Stack gap="3" align="start">
                 <Text>This page is past the end of the list.</Text>

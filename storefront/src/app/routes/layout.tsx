@@ -21,7 +21,7 @@ export const MAIN_ID = 'main-content';
 // The bar along the top while the next screen loads: not needed to show the first one, so its
 // code is fetched once the page has started (Layout's effect), before any click.
 const loadNavigationProgress = async () => ({
-  default: (await import('../../components/ui/navigation-progress')).NavigationProgress,
+  default: (await import('@nappe/web-kit/react/navigation-progress')).NavigationProgress,
 });
 const NavigationProgress = lazy(loadNavigationProgress);
 
@@ -68,7 +68,7 @@ function NavItem({ to, end, children }: { to: string; end?: boolean; children: R
   return (
     <Link
       asChild
-      px={{ base: '2', sm: '3' }}
+      px={{ base: '1.5', sm: '3' }}
       py="2"
       borderRadius="l2"
       whiteSpace="nowrap"
@@ -100,10 +100,16 @@ function Header() {
             aria-label="Main"
             order={{ base: 3, md: 2 }}
             w={{ base: 'full', md: 'auto' }}
-            mx={{ base: '-3', md: '0' }}
-            overflowX="auto"
+            mx={{ base: '-1.5', md: '0' }}
           >
-            <HStack as="ul" gap={{ base: '0', sm: '1' }} listStyleType="none">
+            {/* Five links fit one row at 390 px; on a narrower phone they wrap rather than hide. */}
+            <HStack
+              as="ul"
+              gap={{ base: '0', sm: '1' }}
+              rowGap="1"
+              wrap="wrap"
+              listStyleType="none"
+            >
               <li>
                 <NavItem to={paths.home.getHref()} end>
                   Home

@@ -8,6 +8,7 @@ import {
   Text,
   VStack,
 } from '@chakra-ui/react';
+import { PageLoader } from '@nappe/web-kit/react';
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { flushSync } from 'react-dom';
@@ -19,7 +20,6 @@ import {
 } from 'react-router';
 import { CalendarIcon } from '../../components/ui/icons';
 import { PageTitle } from '../../components/ui/page-title';
-import { PageLoader } from '../../components/ui/page-loader';
 import { LoadError } from '../../components/ui/query-state';
 import { Skeleton } from '../../components/ui/skeleton';
 import { paths } from '../../config/paths';

@@ -3,15 +3,12 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { PlusIcon, SpoonIcon } from '../../../components/ui/icons';
+import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { dessertsQueryOptions, useDesserts } from '../../../features/kitchen/api/get-desserts';
 import { DessertsTable } from '../../../features/kitchen/components/desserts-table';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import {
-  BlockSkeleton,
-  KitchenEmpty,
-  LoadError,
-} from '../../../features/kitchen/components/load-states';
+import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { warm, WithKitchenViewer } from './kitchen-shell';
 
 export const dessertsLoader = (queryClient: QueryClient) => () => {

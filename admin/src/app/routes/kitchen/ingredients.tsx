@@ -3,6 +3,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { PlusIcon, WhiskIcon } from '../../../components/ui/icons';
+import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import {
   ingredientsQueryOptions,
@@ -10,11 +11,7 @@ import {
 } from '../../../features/kitchen/api/get-ingredients';
 import { IngredientsTable } from '../../../features/kitchen/components/ingredients-table';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import {
-  BlockSkeleton,
-  KitchenEmpty,
-  LoadError,
-} from '../../../features/kitchen/components/load-states';
+import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { warm, WithKitchenViewer } from './kitchen-shell';
 
 export const ingredientsLoader = (queryClient: QueryClient) => () => {

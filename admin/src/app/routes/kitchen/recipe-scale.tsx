@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { dessertsQueryOptions } from '../../../features/kitchen/api/get-desserts';
 import { ingredientsQueryOptions } from '../../../features/kitchen/api/get-ingredients';
@@ -9,7 +10,7 @@ import { recipesQueryOptions } from '../../../features/kitchen/api/get-recipes';
 import type { ScaleQuery } from '../../../features/kitchen/api/kitchen-keys';
 import { useKitchenCatalogue } from '../../../features/kitchen/api/use-kitchen-catalogue';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import { BlockSkeleton, LoadError } from '../../../features/kitchen/components/load-states';
+import { BlockSkeleton } from '../../../features/kitchen/components/load-states';
 import { RecipeScaleView } from '../../../features/kitchen/components/recipe-scale-view';
 import { BackLink, warm, WithKitchenViewer, type KitchenViewer } from './kitchen-shell';
 

@@ -3,14 +3,11 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { PlusIcon, WhiskIcon } from '../../../components/ui/icons';
+import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { recipesQueryOptions, useRecipes } from '../../../features/kitchen/api/get-recipes';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import {
-  BlockSkeleton,
-  KitchenEmpty,
-  LoadError,
-} from '../../../features/kitchen/components/load-states';
+import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { RecipesTable } from '../../../features/kitchen/components/recipes-table';
 import { warm, WithKitchenViewer } from './kitchen-shell';
 

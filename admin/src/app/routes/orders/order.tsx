@@ -8,11 +8,7 @@ import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useMe } from '../../../features/auth/api/get-me';
 import { RequireRole } from '../../../features/auth/components/require-role';
-import {
-  BlockSkeleton,
-  KitchenEmpty,
-  LoadError,
-} from '../../../features/kitchen/components/load-states';
+import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { orderQueryOptions, useOrder } from '../../../features/orders/api/get-order';
 import type { OrderDetailView } from '../../../features/orders/api/types';
 import { useOrderAccessLog } from '../../../features/orders/api/get-order-access-log';
@@ -31,6 +27,7 @@ import { useStudio } from '../../../features/studio/api/get-studio';
 import { ApiError } from '../../../lib/api-client';
 import { deviceTimeZone } from '../../../lib/studio-time';
 import { InboxIcon } from '../../../components/ui/icons';
+import { LoadError } from '../../../components/ui/load-error';
 
 /** Starts loading the order while the screen's code arrives — for the chef only. */
 export const orderLoader =

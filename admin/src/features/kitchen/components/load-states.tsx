@@ -1,32 +1,6 @@
-import { Alert, Box, Button, EmptyState, Skeleton, Stack, VisuallyHidden } from '@chakra-ui/react';
+import { Box, EmptyState, Skeleton, Stack, VisuallyHidden } from '@chakra-ui/react';
 import type { ReactNode } from 'react';
-import { errorMessage } from '../../../lib/error-message';
-
-/** A list or item that could not be loaded, with a retry that works. */
-export function LoadError({
-  title,
-  error,
-  onRetry,
-  retrying,
-}: {
-  title: string;
-  error: unknown;
-  onRetry: () => void;
-  retrying?: boolean;
-}) {
-  return (
-    <Alert.Root status="error" role="alert" borderRadius="l2">
-      <Alert.Indicator />
-      <Alert.Content gap="3">
-        <Alert.Title>{title}</Alert.Title>
-        <Alert.Description>{errorMessage(error)}</Alert.Description>
-        <Button size="sm" variant="outline" alignSelf="start" loading={retrying} onClick={onRetry}>
-          Try again
-        </Button>
-      </Alert.Content>
-    </Alert.Root>
-  );
-}
+import { LoadError } from '../../../components/ui/load-error';
 
 /** Grey bars in the shape of what is coming, announced once to screen readers. */
 export function BlockSkeleton({ label, rows = 6 }: { label: string; rows?: number }) {

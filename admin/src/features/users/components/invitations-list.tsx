@@ -1,10 +1,10 @@
 import { Box, Button, Flex, Stack, Text } from '@chakra-ui/react';
 import { Role } from '@nappe/shared';
 import { useState } from 'react';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { RoleBadge } from '../../../components/ui/role-badge';
 import type { Invitation } from '../api/invitations';
 import { useRevokeInvitation } from '../api/revoke-invitation';
-import { ConfirmDialog } from './confirm-dialog';
 
 const HOUR = 3_600_000;
 

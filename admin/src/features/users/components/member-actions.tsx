@@ -1,9 +1,9 @@
 import { Button, Stack, Text, VisuallyHidden } from '@chakra-ui/react';
 import { Role } from '@nappe/shared';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { useChangeRole } from '../api/change-role';
 import type { UserListItem } from '../api/get-users';
 import { useRemoveUser } from '../api/remove-user';
-import { ConfirmDialog } from './confirm-dialog';
 
 /** Who may be changed here: team members other than the chef looking (the API refuses self-removal). */
 export function memberActionsFor(user: UserListItem, currentUserId: string) {

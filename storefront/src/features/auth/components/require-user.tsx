@@ -1,7 +1,7 @@
 import type { AuthUser } from '@nappe/shared';
+import { PageLoader } from '@nappe/web-kit/react';
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router';
-import { PageLoader } from '../../../components/ui/page-loader';
 import { paths } from '../../../config/paths';
 import { useMe } from '../api/get-me';
 

@@ -1,5 +1,5 @@
 import { QueryClient, type DefaultOptions } from '@tanstack/react-query';
-import { ApiError } from './api-client';
+import { ApiError } from '../api-client.js';
 
 /** Client errors (4xx) will not change on a retry; server and network errors might. */
 function shouldRetry(failureCount: number, error: unknown): boolean {

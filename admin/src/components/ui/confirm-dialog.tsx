@@ -1,10 +1,11 @@
 import { Alert, Button, CloseButton, Dialog, Portal, Stack } from '@chakra-ui/react';
 import { useState, type ReactNode } from 'react';
-import { errorMessage } from '../../../lib/error-message';
+import { errorMessage } from '../../lib/error-message';
 
 /**
- * Asks before a team change. The trigger opens it; confirming runs `onConfirm`; a refusal from the
- * server (the last chef, a member already removed) stays in the dialog in the server's words.
+ * Asks before a change that cannot be taken back. The trigger opens it; confirming runs
+ * `onConfirm`; a refusal from the server (something still uses the item, the last chef…) stays in
+ * the dialog in the server's words, under `errorTitle`, until it is closed or tried again.
  */
 export function ConfirmDialog({
   trigger,
@@ -12,6 +13,8 @@ export function ConfirmDialog({
   children,
   confirmLabel,
   pendingLabel,
+  cancelLabel = 'Cancel',
+  errorTitle = 'Not done',
   danger,
   onConfirm,
   onDone,
@@ -21,6 +24,8 @@ export function ConfirmDialog({
   children: ReactNode;
   confirmLabel: string;
   pendingLabel: string;
+  cancelLabel?: string;
+  errorTitle?: string;
   danger?: boolean;
   onConfirm: () => Promise<unknown>;
   onDone?: () => void;
@@ -68,7 +73,7 @@ export function ConfirmDialog({
                   <Alert.Root status="error" role="alert" borderRadius="l2">
                     <Alert.Indicator />
                     <Alert.Content>
-                      <Alert.Title>Not done</Alert.Title>
+                      <Alert.Title>{errorTitle}</Alert.Title>
                       <Alert.Description>{error}</Alert.Description>
                     </Alert.Content>
                   </Alert.Root>
@@ -77,7 +82,7 @@ export function ConfirmDialog({
             </Dialog.Body>
             <Dialog.Footer>
               <Dialog.ActionTrigger asChild>
-                <Button variant="outline">Cancel</Button>
+                <Button variant="outline">{cancelLabel}</Button>
               </Dialog.ActionTrigger>
               <Button
                 colorPalette={danger ? 'danger' : undefined}
