@@ -2,7 +2,7 @@ import { PageLoader } from '@nappe/web-kit/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { Navigate, type RouteObject } from 'react-router';
 import { paths } from '../config/paths';
-import { homeScreen, menusScreen, screenRecipes } from './first-screen';
+import { homeScreen, menusScreen, screenRecipes } from './first-screens';
 import { guestOnlyLoader, requireUserLoader } from './guards';
 import { ErrorPage } from './routes/error-page';
 import { Layout } from './routes/layout';

@@ -7,7 +7,7 @@ import { OTHER_PAGE_ATTRIBUTE, PREBUILT_PATH_ATTRIBUTE } from '../config/prebuil
 // compress about 0.9 KiB worse.
 import { createQueryClient } from '@nappe/web-kit/react';
 import { App, routerInitialized } from './app';
-import { firstScreenData } from './first-screen';
+import { firstScreenData } from './first-screens';
 import { createRoutes } from './router';
 
 export interface StartedApp {

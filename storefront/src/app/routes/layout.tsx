@@ -99,10 +99,12 @@ function Header() {
             as="nav"
             aria-label="Main"
             order={{ base: 3, md: 2 }}
-            w={{ base: 'full', md: 'auto' }}
+            // Edge to edge on a phone, the first link's text in line with the wordmark.
+            w={{ base: 'calc(100% + {spacing.3})', md: 'auto' }}
             mx={{ base: '-1.5', md: '0' }}
           >
-            {/* Five links fit one row at 390 px; on a narrower phone they wrap rather than hide. */}
+            {/* On a phone the wordmark is the way home, so the other four links fit one row from
+                360 px; narrower, they wrap rather than hide. */}
             <HStack
               as="ul"
               gap={{ base: '0', sm: '1' }}
@@ -110,11 +112,11 @@ function Header() {
               wrap="wrap"
               listStyleType="none"
             >
-              <li>
+              <Box as="li" display={{ base: 'none', sm: 'list-item' }}>
                 <NavItem to={paths.home.getHref()} end>
                   Home
                 </NavItem>
-              </li>
+              </Box>
               <li>
                 <NavItem to={paths.menus.getHref()}>Menus</NavItem>
               </li>
