@@ -306,7 +306,8 @@ function EventDetail({ order }: { order: OrderDetail }) {
           <Box overflowX="auto" mx={{ base: '-4', md: '0' }} px={{ base: '4', md: '0' }}>
             <Tabs.List minW="max-content">
               {EVENT_TABS.map((t) => (
-                <Tabs.Trigger key={t} value={t} whiteSpace="nowrap">
+                // Narrower on a phone, so that all four show at 390 px (they scroll below that).
+                <Tabs.Trigger key={t} value={t} whiteSpace="nowrap" px={{ base: '2', sm: '4' }}>
                   {TAB_TITLES[t]}
                 </Tabs.Trigger>
               ))}
