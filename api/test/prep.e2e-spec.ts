@@ -405,8 +405,14 @@ describe('ticks and lead times as orders come in', () => {
         .body as ScheduleBody;
       const leadTime = body.conflicts.filter((c) => c.kind === 'lead_time');
       expect(leadTime.length).toBeGreaterThan(0);
+      const { reference } = await d.t.dataSource
+        .getRepository(OrderEntity)
+        .findOneByOrFail({ id: late });
       for (const c of leadTime) {
         expect(c.orderId).toBe(late);
+        // Named as the chef knows the order, never by its internal id.
+        expect(c.message).toContain(`for order ${reference} cannot be ready`);
+        expect(c.message).not.toContain(late);
         expect(c.checkedFrom).toBe('confirmation');
         expect(Date.parse(c.checkedFromAt!)).toBe(confirmedNow.getTime());
         expect(Date.parse(c.readyAt!)).toBeGreaterThan(Date.parse(c.neededByAt!));

@@ -208,6 +208,7 @@ export function prepOrderOf(
   }
   return {
     id: order.id,
+    reference: order.reference,
     eventDate: order.eventDate,
     serviceTime: order.serviceTime,
     timeZone,

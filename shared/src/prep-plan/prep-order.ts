@@ -21,6 +21,8 @@ export type GuestPlateChange = z.infer<typeof guestPlateChangeSchema>;
 
 export const prepOrderSchema = z.object({
   id: kitchenIdSchema,
+  /** What the chef calls the order (its reference, e.g. N-2026-0003), in messages; else its id. */
+  reference: z.string().trim().min(1).max(40).optional(),
   eventDate: z
     .string()
     .trim()

@@ -402,6 +402,7 @@ export function planPrep(
           neededBy: serviceAt - buffer,
           usedAt: serviceAt,
           orderId: order.id,
+          orderName: order.reference ?? order.id,
           serviceTimeZone: order.timeZone,
         },
       });

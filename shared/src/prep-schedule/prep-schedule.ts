@@ -276,6 +276,8 @@ export interface RunUse {
   usedAt: EpochMinutes;
   /** Set for a plate component of an order. */
   orderId?: string;
+  /** The order as messages name it for the chef (its reference); the id when not given. */
+  orderName?: string;
   /** The order's time zone, for messages. */
   serviceTimeZone?: string;
   /** Set when another run uses this one as a sub-recipe. */
@@ -550,7 +552,7 @@ export function scheduleRuns(
     for (const use of run.uses) {
       if (use.usedAt > timing.expires) {
         const where = use.orderId
-          ? `service of order ${use.orderId} at ${formatForChef(use.usedAt, use.serviceTimeZone ?? tz)}`
+          ? `service of order ${use.orderName ?? use.orderId} at ${formatForChef(use.usedAt, use.serviceTimeZone ?? tz)}`
           : `the parent run ${use.parentRunId ?? ''} at ${formatForChef(use.usedAt, tz)}`;
         conflicts.push({
           kind: 'shelf_life',
@@ -810,7 +812,7 @@ function leadTimeConflicts(
         lateByMinutes: late,
         latestStartAt: toZonedIso(mustStart, tz),
         message:
-          `“${run.recipe.name}” for order ${use.orderId} cannot be ready in time.${wait}` +
+          `“${run.recipe.name}” for order ${use.orderName ?? use.orderId} cannot be ready in time.${wait}` +
           ` ${confirmed === undefined ? 'Started now' : 'Started when the order was confirmed'} (${formatForChef(start, tz)}), with hands-on work between ${calendar.hours.start} and ${calendar.hours.end}, it is ready ${formatForChef(ready.finish, tz)} —` +
           ` ${formatDurationForChef(late)} after plating must begin (${formatForChef(use.neededBy, tz)}) for service at ${formatForChef(use.usedAt, serviceTz)}.` +
           ` It had to start by ${formatForChef(mustStart, tz)}. Move the service, agree a later date, or leave the component out.`,

@@ -334,6 +334,21 @@ describe('lead time at confirmation', () => {
     expect(c.message).toMatch(/for service at Tue 24 Mar 19:30\. It had to start by Mon 23 Mar /);
   });
 
+  it('names the order by its reference when it has one, as the chef knows it', () => {
+    const [c] = checkOrderLeadTime(
+      demo,
+      order('3f9c0a52-late', '2026-03-24', { reference: 'N-2026-0042' }),
+      settings,
+      '2026-03-24T09:00:00+01:00',
+    );
+    expect(c?.message).toMatch(
+      /^“Vanilla custard ice cream” for order N-2026-0042 cannot be ready/,
+    );
+    expect(c?.message).not.toContain('3f9c0a52');
+    // The order's id still travels with the conflict, for the screens to link to it.
+    expect(c?.kind === 'lead_time' && c.orderId).toBe('3f9c0a52-late');
+  });
+
   it('the same order confirmed the Friday before has no conflict', () => {
     expect(
       checkOrderLeadTime(demo, order('early', '2026-03-24'), settings, '2026-03-20T12:00:00+01:00'),
