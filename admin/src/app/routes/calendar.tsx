@@ -13,13 +13,13 @@ import { dateInTimeZone, Role } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { BlockSkeleton } from '../../components/ui/block-skeleton';
 import { ChevronLeftIcon, ChevronRightIcon } from '../../components/ui/icons';
 import { LoadError } from '../../components/ui/load-error';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { RequireRole } from '../../features/auth/components/require-role';
-import { BlockSkeleton } from '../../features/kitchen/components/load-states';
 import {
   calendarSettingsQueryOptions,
   useCalendarSettings,

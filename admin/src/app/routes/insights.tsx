@@ -1,7 +1,9 @@
-import { Button, Container, EmptyState, Heading, SimpleGrid, Stack, Text } from '@chakra-ui/react';
+import { Button, Container, Heading, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import { Role } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link as RouterLink } from 'react-router';
+import { BlockSkeleton } from '../../components/ui/block-skeleton';
+import { EmptyState } from '../../components/ui/empty-state';
 import { InboxIcon } from '../../components/ui/icons';
 import { LoadError } from '../../components/ui/load-error';
 import { PageTitle } from '../../components/ui/page-title';
@@ -21,7 +23,6 @@ import {
 } from '../../features/insights/components/insights-charts';
 import { formatDayLong } from '../../features/insights/lib/format';
 import { isEmptyDashboard } from '../../features/insights/lib/summaries';
-import { BlockSkeleton } from '../../features/kitchen/components/load-states';
 
 /** Starts the figures loading while the screen's code (and recharts) arrives — for the chef only. */
 export const insightsLoader = (queryClient: QueryClient) => async () => {
@@ -106,29 +107,20 @@ function Insights() {
 
 function EmptyDashboard() {
   return (
-    <EmptyState.Root
-      borderWidth="1px"
-      borderStyle="dashed"
-      borderColor="border.emphasized"
-      borderRadius="l3"
-      bg="bg.panel"
-    >
-      <EmptyState.Content>
-        <EmptyState.Indicator color="caramel.fg">
-          <InboxIcon />
-        </EmptyState.Indicator>
-        <EmptyState.Title as="h2" fontFamily="heading" textStyle="xl">
-          No bookings yet
-        </EmptyState.Title>
-        <EmptyState.Description color="fg.muted" textAlign="center" maxW="lg">
-          When clients book on the storefront, this page shows the next two weeks of events, the
-          requests waiting for your decision, revenue by month, plates by week, food cost and
-          anything that needs your attention.
-        </EmptyState.Description>
+    <EmptyState
+      icon={<InboxIcon />}
+      title="No bookings yet"
+      titleAs="h2"
+      descriptionMaxW="lg"
+      action={
         <Button asChild variant="outline" size="sm">
           <RouterLink to={paths.menus.getHref()}>Check the menus clients can book</RouterLink>
         </Button>
-      </EmptyState.Content>
-    </EmptyState.Root>
+      }
+    >
+      When clients book on the storefront, this page shows the next two weeks of events, the
+      requests waiting for your decision, revenue by month, plates by week, food cost and anything
+      that needs your attention.
+    </EmptyState>
   );
 }

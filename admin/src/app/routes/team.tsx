@@ -17,13 +17,13 @@ import { Role } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { Link as RouterLink, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { EmptyState } from '../../components/ui/empty-state';
 import { ChevronLeftIcon, ChevronRightIcon, GuestsIcon } from '../../components/ui/icons';
 import { LoadError } from '../../components/ui/load-error';
 import { PageTitle } from '../../components/ui/page-title';
 import { paths } from '../../config/paths';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { RequireRole } from '../../features/auth/components/require-role';
-import { KitchenEmpty } from '../../features/kitchen/components/load-states';
 import { useStudio } from '../../features/studio/api/get-studio';
 import { USERS_PAGE_SIZE, usersQueryOptions, useUsers } from '../../features/users/api/get-users';
 import { invitationsQueryOptions, useInvitations } from '../../features/users/api/invitations';
@@ -179,9 +179,9 @@ function Team({ currentUserId }: { currentUserId: string }) {
                 retrying={users.isFetching}
               />
             ) : users.data.total === 0 ? (
-              <KitchenEmpty icon={<GuestsIcon />} title="No accounts yet">
+              <EmptyState icon={<GuestsIcon />} title="No accounts yet">
                 Team members and clients will be listed here once they have accounts.
-              </KitchenEmpty>
+              </EmptyState>
             ) : users.data.items.length === 0 ? (
               <Stack gap="3" align="start">
                 <Text>This page is past the end of the list.</Text>

@@ -22,6 +22,7 @@ import {
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { ChevronRightIcon, InboxIcon } from '../../components/ui/icons';
+import { LoadError } from '../../components/ui/load-error';
 import { PageTitle } from '../../components/ui/page-title';
 import { RoleBadge } from '../../components/ui/role-badge';
 import { paths } from '../../config/paths';
@@ -31,11 +32,7 @@ import { usePrepPlan } from '../../features/prep/api/get-prep-plan';
 import { usePrepSchedule } from '../../features/prep/api/get-prep-schedule';
 import { DayRecipes } from '../../features/prep/components/day-recipes';
 import { EventList } from '../../features/prep/components/event-list';
-import {
-  PrepLoadError,
-  PrepSection,
-  PrepSkeleton,
-} from '../../features/prep/components/prep-states';
+import { PrepSection, PrepSkeleton } from '../../features/prep/components/prep-states';
 import { TaskPreview } from '../../features/prep/components/task-card';
 import {
   ConflictsPanel,
@@ -145,7 +142,7 @@ function TodayBody({ today, user, chef }: { today: string; user: AuthUser; chef:
             {schedule.isPending ? (
               <PrepSkeleton label="Loading today’s tasks…" rows={3} />
             ) : schedule.isError ? (
-              <PrepLoadError
+              <LoadError
                 title="Today’s tasks could not be loaded"
                 error={schedule.error}
                 onRetry={() => void schedule.refetch()}
@@ -223,7 +220,7 @@ function Services({ today }: { today: string }) {
       {events.isPending ? (
         <PrepSkeleton label="Loading today’s events…" rows={2} />
       ) : events.isError ? (
-        <PrepLoadError
+        <LoadError
           title="The events could not be loaded"
           error={events.error}
           onRetry={() => void events.refetch()}
@@ -341,7 +338,7 @@ function TodayRecipes({
       {plan.isPending || taskRunIds === undefined ? (
         <PrepSkeleton label="Loading the recipes…" rows={2} />
       ) : plan.isError ? (
-        <PrepLoadError
+        <LoadError
           title="The recipes could not be loaded"
           error={plan.error}
           onRetry={() => void plan.refetch()}

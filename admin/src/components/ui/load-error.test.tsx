@@ -46,4 +46,22 @@ describe('LoadError', () => {
     const button = within(screen.getByRole('alert')).getByRole('button');
     expect(button).toBeDisabled();
   });
+
+  it('words the error the caller’s way when it passes its own wording', () => {
+    renderIn(
+      <LoadError
+        title="The briefing could not be loaded"
+        error={new ApiError(403, ['Forbidden resource'])}
+        describe={(error) =>
+          error instanceof ApiError && error.status === 403
+            ? 'Your role is not allowed to do this. Ask the chef.'
+            : 'Please try again in a moment.'
+        }
+        onRetry={() => {}}
+      />,
+    );
+    const alert = screen.getByRole('alert');
+    expect(alert).toHaveTextContent('Your role is not allowed to do this. Ask the chef.');
+    expect(alert).not.toHaveTextContent('Forbidden resource');
+  });
 });

@@ -3,17 +3,14 @@ import type { OrderSummary } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { useSearchParams } from 'react-router';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { AllergyIcon, CalendarIcon } from '../../../components/ui/icons';
 import { paths } from '../../../config/paths';
 import { useAllergyCounts } from '../../../features/allergy-notes/api/get-allergy-counts';
 import { eventsQueryOptions, useEvents } from '../../../features/allergy-notes/api/get-events';
 import { CautionLine } from '../../../features/allergy-notes/components/caution-line';
 import { EventsList } from '../../../features/allergy-notes/components/events-list';
-import {
-  BlockSkeleton,
-  EmptyNote,
-  LoadError,
-} from '../../../features/allergy-notes/components/load-states';
+import { BlockSkeleton, LoadError } from '../../../features/allergy-notes/components/load-states';
 import { describeError } from '../../../features/allergy-notes/lib/describe-error';
 import { eventWindow, RECENT_DAYS } from '../../../features/allergy-notes/lib/event-window';
 import { studioQueryOptions } from '../../../features/studio/api/get-studio';
@@ -138,10 +135,10 @@ function AllergyNotes({ timeZone, isChef }: { timeZone: string; isChef: boolean 
               Upcoming
             </Heading>
             {upcoming.length === 0 ? (
-              <EmptyNote icon={<CalendarIcon />} title="No upcoming events">
+              <EmptyState icon={<CalendarIcon />} title="No upcoming events">
                 Confirmed bookings and requests waiting for the chef appear here with their guests’
                 allergies and diets.
-              </EmptyNote>
+              </EmptyState>
             ) : (
               <>
                 {list(shown)}

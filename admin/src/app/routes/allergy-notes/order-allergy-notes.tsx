@@ -2,6 +2,7 @@ import { Badge, Button, Flex, Heading, Stack, Text } from '@chakra-ui/react';
 import { plural } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link as RouterLink, useParams, type LoaderFunctionArgs } from 'react-router';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { AllergyIcon, GuestsIcon, TraceIcon } from '../../../components/ui/icons';
 import { paths } from '../../../config/paths';
 import {
@@ -12,11 +13,7 @@ import { AccessLog } from '../../../features/allergy-notes/components/access-log
 import { CautionLine } from '../../../features/allergy-notes/components/caution-line';
 import { GuestCard } from '../../../features/allergy-notes/components/guest-card';
 import { ClearIcon, SwapIcon } from '../../../features/allergy-notes/components/icons';
-import {
-  BlockSkeleton,
-  EmptyNote,
-  LoadError,
-} from '../../../features/allergy-notes/components/load-states';
+import { BlockSkeleton, LoadError } from '../../../features/allergy-notes/components/load-states';
 import {
   hasRequirement,
   unresolvedPlates,
@@ -179,10 +176,10 @@ function OrderAllergyNotes({ orderId, viewer }: { orderId: string; viewer: Notes
       )}
 
       {guests.length === 0 ? (
-        <EmptyNote icon={<ClearIcon />} title="No allergies or diets">
+        <EmptyState icon={<ClearIcon />} title="No allergies or diets">
           No guest of this event stated an allergy, a diet or a note: every guest gets the standard
           plate.
-        </EmptyNote>
+        </EmptyState>
       ) : (
         <Stack gap="4">
           {guests.map((guest) => (

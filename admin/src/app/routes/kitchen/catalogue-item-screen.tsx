@@ -3,11 +3,11 @@ import { Role } from '@nappe/shared';
 import type { QueryClient, UseQueryResult } from '@tanstack/react-query';
 import { Fragment, type ReactNode } from 'react';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
 import { LoadError } from '../../../components/ui/load-error';
 import { RequireRole } from '../../../features/auth/components/require-role';
 import type { CatalogueItem } from '../../../features/kitchen/components/item-editor';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import { BlockSkeleton } from '../../../features/kitchen/components/load-states';
 import {
   BackLink,
   warm,

@@ -2,13 +2,14 @@ import { Button } from '@chakra-ui/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { Link as RouterLink } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { PlusIcon, SpoonIcon } from '../../../components/ui/icons';
 import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { dessertsQueryOptions, useDesserts } from '../../../features/kitchen/api/get-desserts';
 import { DessertsTable } from '../../../features/kitchen/components/desserts-table';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { warm, WithKitchenViewer } from './kitchen-shell';
 
 export const dessertsLoader = (queryClient: QueryClient) => () => {
@@ -51,11 +52,11 @@ function Desserts({ canEdit }: { canEdit: boolean }) {
           retrying={desserts.isFetching}
         />
       ) : desserts.data.length === 0 ? (
-        <KitchenEmpty icon={<SpoonIcon />} title="No desserts yet" action={newButton || undefined}>
+        <EmptyState icon={<SpoonIcon />} title="No desserts yet" action={newButton || undefined}>
           {canEdit
             ? 'Put recipes on a plate — a portion of each — to cost it and declare its allergens.'
             : 'The chef has not composed any desserts yet.'}
-        </KitchenEmpty>
+        </EmptyState>
       ) : (
         <DessertsTable desserts={desserts.data} hrefOf={hrefOf} />
       )}

@@ -2,6 +2,8 @@ import { Button } from '@chakra-ui/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { Link as RouterLink } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { PlusIcon, WhiskIcon } from '../../../components/ui/icons';
 import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
@@ -11,7 +13,6 @@ import {
 } from '../../../features/kitchen/api/get-ingredients';
 import { IngredientsTable } from '../../../features/kitchen/components/ingredients-table';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { warm, WithKitchenViewer } from './kitchen-shell';
 
 export const ingredientsLoader = (queryClient: QueryClient) => () => {
@@ -58,15 +59,11 @@ function Ingredients({ canEdit, currency }: { canEdit: boolean; currency: string
           retrying={ingredients.isFetching}
         />
       ) : ingredients.data.length === 0 ? (
-        <KitchenEmpty
-          icon={<WhiskIcon />}
-          title="No ingredients yet"
-          action={newButton || undefined}
-        >
+        <EmptyState icon={<WhiskIcon />} title="No ingredients yet" action={newButton || undefined}>
           {canEdit
             ? 'Add what you buy — butter, cream, sugar — with its pack, price and allergens. Recipes are built from these.'
             : 'The chef has not added any ingredients yet.'}
-        </KitchenEmpty>
+        </EmptyState>
       ) : (
         <IngredientsTable
           ingredients={ingredients.data}

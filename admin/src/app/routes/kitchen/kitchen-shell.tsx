@@ -3,12 +3,12 @@ import { Role, type AuthUser } from '@nappe/shared';
 import type { EnsureQueryDataOptions, QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
 import { ChevronLeftIcon } from '../../../components/ui/icons';
 import { LoadError } from '../../../components/ui/load-error';
 import { PageTitle } from '../../../components/ui/page-title';
 import { meQueryOptions, useMe } from '../../../features/auth/api/get-me';
 import { studioQueryOptions, useStudio } from '../../../features/studio/api/get-studio';
-import { BlockSkeleton } from '../../../features/kitchen/components/load-states';
 
 /** Who is looking at a Kitchen screen, and the studio's currency for its money. */
 export interface KitchenViewer {

@@ -2,12 +2,13 @@ import { Button } from '@chakra-ui/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { Link as RouterLink } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { InboxIcon, PlusIcon } from '../../../components/ui/icons';
 import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { menusQueryOptions, useMenus } from '../../../features/kitchen/api/get-menus';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { MenusTable } from '../../../features/kitchen/components/menus-table';
 import { warm, WithKitchenViewer } from './kitchen-shell';
 
@@ -51,11 +52,11 @@ function Menus({ canEdit, currency }: { canEdit: boolean; currency: string }) {
           retrying={menus.isFetching}
         />
       ) : menus.data.length === 0 ? (
-        <KitchenEmpty icon={<InboxIcon />} title="No menus yet" action={newButton || undefined}>
+        <EmptyState icon={<InboxIcon />} title="No menus yet" action={newButton || undefined}>
           {canEdit
             ? 'Put desserts together and price them per guest; active menus appear on the storefront.'
             : 'The chef has not published any menus yet.'}
-        </KitchenEmpty>
+        </EmptyState>
       ) : (
         <MenusTable menus={menus.data} currency={currency} hrefOf={hrefOf} />
       )}

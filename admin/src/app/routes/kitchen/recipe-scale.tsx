@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
 import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { dessertsQueryOptions } from '../../../features/kitchen/api/get-desserts';
@@ -10,7 +11,6 @@ import { recipesQueryOptions } from '../../../features/kitchen/api/get-recipes';
 import type { ScaleQuery } from '../../../features/kitchen/api/kitchen-keys';
 import { useKitchenCatalogue } from '../../../features/kitchen/api/use-kitchen-catalogue';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import { BlockSkeleton } from '../../../features/kitchen/components/load-states';
 import { RecipeScaleView } from '../../../features/kitchen/components/recipe-scale-view';
 import { BackLink, warm, WithKitchenViewer, type KitchenViewer } from './kitchen-shell';
 

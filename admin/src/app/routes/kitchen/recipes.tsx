@@ -2,12 +2,13 @@ import { Button } from '@chakra-ui/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { Link as RouterLink } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { PlusIcon, WhiskIcon } from '../../../components/ui/icons';
 import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { recipesQueryOptions, useRecipes } from '../../../features/kitchen/api/get-recipes';
 import { KitchenPageHeader } from '../../../features/kitchen/components/kitchen-page-header';
-import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { RecipesTable } from '../../../features/kitchen/components/recipes-table';
 import { warm, WithKitchenViewer } from './kitchen-shell';
 
@@ -55,11 +56,11 @@ function Recipes({ canEdit }: { canEdit: boolean }) {
           retrying={recipes.isFetching}
         />
       ) : recipes.data.length === 0 ? (
-        <KitchenEmpty icon={<WhiskIcon />} title="No recipes yet" action={newButton || undefined}>
+        <EmptyState icon={<WhiskIcon />} title="No recipes yet" action={newButton || undefined}>
           {canEdit
             ? 'Write a component — a crumble, a custard base — from your ingredients, then use it in desserts.'
             : 'The chef has not written any recipes yet.'}
-        </KitchenEmpty>
+        </EmptyState>
       ) : (
         <RecipesTable recipes={recipes.data} hrefOf={hrefOf} />
       )}

@@ -3,12 +3,13 @@ import { dateInTimeZone, ORDER_STATUS_LABELS_FOR_CHEF, Role } from '@nappe/share
 import type { QueryClient } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { Link as RouterLink, useParams, type LoaderFunctionArgs } from 'react-router';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { ChevronLeftIcon } from '../../../components/ui/icons';
 import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useMe } from '../../../features/auth/api/get-me';
 import { RequireRole } from '../../../features/auth/components/require-role';
-import { BlockSkeleton, KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { orderQueryOptions, useOrder } from '../../../features/orders/api/get-order';
 import type { OrderDetailView } from '../../../features/orders/api/types';
 import { useOrderAccessLog } from '../../../features/orders/api/get-order-access-log';
@@ -89,10 +90,10 @@ function Order({ id }: { id: string }) {
       <Frame title={missing ? 'Order not found' : 'Order'}>
         <BackToOrders />
         {missing ? (
-          <KitchenEmpty icon={<InboxIcon />} title="There is no such order">
+          <EmptyState icon={<InboxIcon />} title="There is no such order">
             The link may be mistyped, or the order belongs to another studio. Find it from the list
             of orders.
-          </KitchenEmpty>
+          </EmptyState>
         ) : (
           <LoadError
             title="The order could not be loaded"

@@ -3,13 +3,13 @@ import { OrderStatus, Role } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useMemo, useRef } from 'react';
 import { useLocation, useNavigate, useNavigation, type LoaderFunctionArgs } from 'react-router';
+import { EmptyState } from '../../../components/ui/empty-state';
 import { InboxIcon } from '../../../components/ui/icons';
 import { LoadError } from '../../../components/ui/load-error';
 import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../config/paths';
 import { meQueryOptions, useMe } from '../../../features/auth/api/get-me';
 import { RequireRole } from '../../../features/auth/components/require-role';
-import { KitchenEmpty } from '../../../features/kitchen/components/load-states';
 import { ordersQueryOptions, useOrders } from '../../../features/orders/api/get-orders';
 import { AwaitingDecision } from '../../../features/orders/components/awaiting-decision';
 import { OrdersFilters } from '../../../features/orders/components/orders-filters';
@@ -156,7 +156,7 @@ function Orders() {
           />
         ) : orders.data.total === 0 ? (
           hasFilters(filters) ? (
-            <KitchenEmpty
+            <EmptyState
               icon={<InboxIcon />}
               title="No orders match these filters"
               action={
@@ -167,15 +167,15 @@ function Orders() {
             >
               Try another status or date range, or search for part of a reference or a client’s
               name.
-            </KitchenEmpty>
+            </EmptyState>
           ) : (
-            <KitchenEmpty icon={<InboxIcon />} title="No bookings yet">
+            <EmptyState icon={<InboxIcon />} title="No bookings yet">
               When a client books on the storefront and pays, the request appears here for you to
               confirm or decline.
-            </KitchenEmpty>
+            </EmptyState>
           )
         ) : orders.data.items.length === 0 ? (
-          <KitchenEmpty
+          <EmptyState
             icon={<InboxIcon />}
             title="This page is past the end of the list"
             action={
@@ -185,7 +185,7 @@ function Orders() {
             }
           >
             There are {orders.data.total} orders with these filters.
-          </KitchenEmpty>
+          </EmptyState>
         ) : (
           <>
             <OrdersTableView table={table} busy={orders.isPlaceholderData} hrefOf={hrefOf} />

@@ -2,6 +2,7 @@ import { Alert, Flex, SimpleGrid, Stack, Text } from '@chakra-ui/react';
 import { addIsoDays, plural } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import { useRecipeLabels } from '../../../features/prep/api/get-label-texts';
 import { prepPlanQueryOptions, usePrepPlan } from '../../../features/prep/api/get-prep-plan';
@@ -12,7 +13,6 @@ import { LabelPreview } from '../../../features/prep/components/label-preview';
 import { TagIcon } from '../../../features/prep/components/prep-icons';
 import {
   PrepEmpty,
-  PrepLoadError,
   PrepPageHeader,
   PrepSkeleton,
 } from '../../../features/prep/components/prep-states';
@@ -101,7 +101,7 @@ function Labels({ viewer }: { viewer: PrepViewer }) {
       ) : plan.isPending ? (
         <PrepSkeleton label="Finding what is made on this day…" />
       ) : plan.isError ? (
-        <PrepLoadError
+        <LoadError
           title="The components made on this day could not be found"
           error={plan.error}
           onRetry={() => void plan.refetch()}

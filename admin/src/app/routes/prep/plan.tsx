@@ -2,6 +2,7 @@ import { Alert, Box } from '@chakra-ui/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { CalendarIcon } from '../../../components/ui/icons';
+import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import {
   planQuery,
@@ -13,7 +14,6 @@ import { DownloadButton } from '../../../components/ui/download-button';
 import { PlanView } from '../../../features/prep/components/plan-view';
 import {
   PrepEmpty,
-  PrepLoadError,
   PrepPageHeader,
   PrepSkeleton,
 } from '../../../features/prep/components/prep-states';
@@ -100,7 +100,7 @@ function Plan({ viewer }: { viewer: PrepViewer }) {
       ) : plan.isPending ? (
         <PrepSkeleton label="Working out the plan…" />
       ) : plan.isError ? (
-        <PrepLoadError
+        <LoadError
           title="The plan could not be worked out"
           error={plan.error}
           onRetry={() => void plan.refetch()}

@@ -2,9 +2,10 @@ import { Container } from '@chakra-ui/react';
 import { Role, type AuthUser } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
+import { LoadError } from '../../../components/ui/load-error';
 import { PageTitle } from '../../../components/ui/page-title';
 import { useMe } from '../../../features/auth/api/get-me';
-import { PrepLoadError, PrepSkeleton } from '../../../features/prep/components/prep-states';
+import { PrepSkeleton } from '../../../features/prep/components/prep-states';
 import { studioToday } from '../../../features/prep/lib/dates';
 import { studioQueryOptions, useStudio } from '../../../features/studio/api/get-studio';
 import { deviceTimeZone } from '../../../lib/studio-time';
@@ -45,7 +46,7 @@ export function WithPrepViewer({
         {studio.isPending ? (
           <PrepSkeleton label="Loading…" />
         ) : studio.isError ? (
-          <PrepLoadError
+          <LoadError
             title="The studio’s settings could not be loaded"
             error={studio.error}
             onRetry={() => void studio.refetch()}

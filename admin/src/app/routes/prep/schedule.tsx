@@ -2,6 +2,7 @@ import { Alert, Box, Flex, Stack } from '@chakra-ui/react';
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { WhiskIcon } from '../../../components/ui/icons';
+import { LoadError } from '../../../components/ui/load-error';
 import { paths } from '../../../config/paths';
 import {
   prepScheduleQueryOptions,
@@ -10,7 +11,6 @@ import {
 import { DayPicker } from '../../../features/prep/components/day-picker';
 import {
   PrepEmpty,
-  PrepLoadError,
   PrepPageHeader,
   PrepSkeleton,
 } from '../../../features/prep/components/prep-states';
@@ -70,7 +70,7 @@ function Schedule({ viewer }: { viewer: PrepViewer }) {
       ) : schedule.isPending ? (
         <PrepSkeleton label="Loading the day’s tasks…" />
       ) : schedule.isError ? (
-        <PrepLoadError
+        <LoadError
           title="The schedule could not be loaded"
           error={schedule.error}
           onRetry={() => void schedule.refetch()}

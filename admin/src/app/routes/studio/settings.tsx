@@ -2,12 +2,12 @@ import { Container, Heading, Stack, Text } from '@chakra-ui/react';
 import { Role } from '@nappe/shared';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
 import { LoadError } from '../../../components/ui/load-error';
 import { PageTitle } from '../../../components/ui/page-title';
 import { meQueryOptions, useMe } from '../../../features/auth/api/get-me';
 import { RequireRole } from '../../../features/auth/components/require-role';
 import { useUnsavedChangesGuard } from '../../../features/kitchen/components/unsaved-changes-guard';
-import { BlockSkeleton } from '../../../features/kitchen/components/load-states';
 import {
   studioSettingsQueryOptions,
   useStudioSettings,

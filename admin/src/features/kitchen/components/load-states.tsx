@@ -1,21 +1,6 @@
-import { Box, EmptyState, Skeleton, Stack, VisuallyHidden } from '@chakra-ui/react';
 import type { ReactNode } from 'react';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
 import { LoadError } from '../../../components/ui/load-error';
-
-/** Grey bars in the shape of what is coming, announced once to screen readers. */
-export function BlockSkeleton({ label, rows = 6 }: { label: string; rows?: number }) {
-  return (
-    <Box role="status">
-      <VisuallyHidden>{label}</VisuallyHidden>
-      <Stack gap="3" aria-hidden>
-        <Skeleton height="10" width="full" maxW="sm" />
-        {Array.from({ length: rows }, (_, i) => (
-          <Skeleton key={i} height="8" width={i % 3 === 2 ? '3/4' : 'full'} />
-        ))}
-      </Stack>
-    </Box>
-  );
-}
 
 /** What `QueryGate` reads of a query (or of several read together). */
 interface GateQuery<T> {
@@ -51,38 +36,4 @@ export function QueryGate<T>({
   }
   if (query.data === undefined) return <BlockSkeleton label={loading} />;
   return children(query.data);
-}
-
-/** Nothing here yet, and what to do about it. */
-export function KitchenEmpty({
-  icon,
-  title,
-  children,
-  action,
-}: {
-  icon: ReactNode;
-  title: string;
-  children: ReactNode;
-  action?: ReactNode;
-}) {
-  return (
-    <EmptyState.Root
-      borderWidth="1px"
-      borderStyle="dashed"
-      borderColor="border.emphasized"
-      borderRadius="l3"
-      bg="bg.panel"
-    >
-      <EmptyState.Content>
-        <EmptyState.Indicator color="caramel.fg">{icon}</EmptyState.Indicator>
-        <EmptyState.Title fontFamily="heading" textStyle="xl">
-          {title}
-        </EmptyState.Title>
-        <EmptyState.Description color="fg.muted" textAlign="center" maxW="md">
-          {children}
-        </EmptyState.Description>
-        {action}
-      </EmptyState.Content>
-    </EmptyState.Root>
-  );
 }

@@ -21,6 +21,7 @@ import {
   type ScaledRecipe,
 } from '@nappe/shared';
 import { useMemo, useState, type FormEvent } from 'react';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
 import { errorMessage } from '../../../lib/error-message';
 import type { ScaleQuery } from '../api/kitchen-keys';
 import { useRecipeScaled } from '../api/get-recipe-scaled';
@@ -28,7 +29,6 @@ import type { RecipeResponse } from '../api/types';
 import { parseNumber } from '../lib/form-resolver';
 import { formatGrams, formatNumber, unitLabel } from '../lib/labels';
 import { attempt, indexWith, toDomainDessert } from '../lib/live-kitchen';
-import { BlockSkeleton } from './load-states';
 import type { KitchenCatalogueData } from '../api/types';
 
 function pieces(count: number, unit: 'piece' | 'leaf') {

@@ -1,95 +1,16 @@
-import {
-  Alert,
-  Box,
-  Button,
-  EmptyState,
-  Flex,
-  Heading,
-  HStack,
-  Skeleton,
-  Stack,
-  Text,
-  VisuallyHidden,
-} from '@chakra-ui/react';
-import type { ReactNode } from 'react';
-import { errorMessage } from '../../../lib/error-message';
+import { Box, Flex, Heading, HStack, Stack, Text } from '@chakra-ui/react';
+import type { ComponentProps, ReactNode } from 'react';
+import { BlockSkeleton } from '../../../components/ui/block-skeleton';
+import { EmptyState } from '../../../components/ui/empty-state';
 
-/** Something that could not be loaded, with a retry that works. */
-export function PrepLoadError({
-  title,
-  error,
-  onRetry,
-  retrying,
-}: {
-  title: string;
-  error: unknown;
-  onRetry: () => void;
-  retrying?: boolean;
-}) {
-  return (
-    <Alert.Root status="error" role="alert" borderRadius="l2">
-      <Alert.Indicator />
-      <Alert.Content gap="3">
-        <Alert.Title>{title}</Alert.Title>
-        <Alert.Description>{errorMessage(error)}</Alert.Description>
-        <Button size="sm" variant="outline" alignSelf="start" loading={retrying} onClick={onRetry}>
-          Try again
-        </Button>
-      </Alert.Content>
-    </Alert.Root>
-  );
+/** Nothing here, and what to do about it: its title is an h2, straight under the screen's h1. */
+export function PrepEmpty(props: ComponentProps<typeof EmptyState>) {
+  return <EmptyState titleAs="h2" py={{ base: '8', md: '10' }} {...props} />;
 }
 
 /** Grey bars in the shape of what is coming, announced once to screen readers. */
 export function PrepSkeleton({ label, rows = 5 }: { label: string; rows?: number }) {
-  return (
-    <Box role="status">
-      <VisuallyHidden>{label}</VisuallyHidden>
-      <Stack gap="3" aria-hidden>
-        <Skeleton height="8" width="full" maxW="sm" />
-        {Array.from({ length: rows }, (_, i) => (
-          <Skeleton key={i} height="14" width={i % 3 === 2 ? '3/4' : 'full'} />
-        ))}
-      </Stack>
-    </Box>
-  );
-}
-
-/** Nothing here, and what to do about it. */
-export function PrepEmpty({
-  icon,
-  title,
-  children,
-  action,
-}: {
-  icon: ReactNode;
-  title: string;
-  children?: ReactNode;
-  action?: ReactNode;
-}) {
-  return (
-    <EmptyState.Root
-      borderWidth="1px"
-      borderStyle="dashed"
-      borderColor="border.emphasized"
-      borderRadius="l3"
-      bg="bg.panel"
-      py={{ base: '8', md: '10' }}
-    >
-      <EmptyState.Content>
-        <EmptyState.Indicator color="caramel.fg">{icon}</EmptyState.Indicator>
-        <EmptyState.Title as="h2" fontFamily="heading" textStyle="xl" textAlign="center">
-          {title}
-        </EmptyState.Title>
-        {children && (
-          <EmptyState.Description color="fg.muted" textAlign="center" maxW="md">
-            {children}
-          </EmptyState.Description>
-        )}
-        {action}
-      </EmptyState.Content>
-    </EmptyState.Root>
-  );
+  return <BlockSkeleton label={label} rows={rows} headHeight="8" rowHeight="14" />;
 }
 
 /** The top of every Prep screen: the section, the title, a line of context, the actions. */
