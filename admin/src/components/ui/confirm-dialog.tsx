@@ -1,9 +1,10 @@
-import { Alert, Button, CloseButton, Dialog, Portal, Stack } from '@chakra-ui/react';
 import { useState, type ReactNode } from 'react';
 import { errorMessage } from '../../lib/error-message';
+import { ActionDialog } from './action-dialog';
 
 /**
- * Asks before a change that cannot be taken back. The trigger opens it; confirming runs
+ * Asks before a change that cannot be taken back, in the one dialog frame (ActionDialog), keeping
+ * its own open, pending and error state. The trigger opens it; confirming runs
  * `onConfirm`; a refusal from the server (something still uses the item, the last chef…) stays in
  * the dialog in the server's words, under `errorTitle`, until it is closed or tried again.
  */
@@ -49,56 +50,24 @@ export function ConfirmDialog({
   };
 
   return (
-    <Dialog.Root
-      role="alertdialog"
+    <ActionDialog
       open={open}
-      onOpenChange={(e) => {
-        setOpen(e.open);
-        if (!e.open) setError(null);
+      onOpenChange={(next) => {
+        setOpen(next);
+        if (!next) setError(null);
       }}
-      placement="center"
+      trigger={trigger}
+      title={title}
+      error={error}
+      errorTitle={errorTitle}
+      confirmLabel={confirmLabel}
+      confirmPalette={danger ? 'danger' : undefined}
+      pending={pending}
+      pendingLabel={pendingLabel}
+      onConfirm={() => void confirm()}
+      keepLabel={cancelLabel}
     >
-      <Dialog.Trigger asChild>{trigger}</Dialog.Trigger>
-      <Portal>
-        <Dialog.Backdrop />
-        <Dialog.Positioner px="4">
-          <Dialog.Content bg="bg.panel">
-            <Dialog.Header>
-              <Dialog.Title>{title}</Dialog.Title>
-            </Dialog.Header>
-            <Dialog.Body>
-              <Stack gap="4">
-                {children}
-                {error && (
-                  <Alert.Root status="error" role="alert" borderRadius="l2">
-                    <Alert.Indicator />
-                    <Alert.Content>
-                      <Alert.Title>{errorTitle}</Alert.Title>
-                      <Alert.Description>{error}</Alert.Description>
-                    </Alert.Content>
-                  </Alert.Root>
-                )}
-              </Stack>
-            </Dialog.Body>
-            <Dialog.Footer>
-              <Dialog.ActionTrigger asChild>
-                <Button variant="outline">{cancelLabel}</Button>
-              </Dialog.ActionTrigger>
-              <Button
-                colorPalette={danger ? 'danger' : undefined}
-                loading={pending}
-                loadingText={pendingLabel}
-                onClick={() => void confirm()}
-              >
-                {confirmLabel}
-              </Button>
-            </Dialog.Footer>
-            <Dialog.CloseTrigger asChild>
-              <CloseButton size="sm" aria-label="Close" />
-            </Dialog.CloseTrigger>
-          </Dialog.Content>
-        </Dialog.Positioner>
-      </Portal>
-    </Dialog.Root>
+      {children}
+    </ActionDialog>
   );
 }

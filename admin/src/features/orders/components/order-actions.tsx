@@ -32,7 +32,8 @@ import { useDeclineOrder } from '../api/decline-order';
 import { useCancellationPreview } from '../api/get-cancellation-preview';
 import { orderKeys } from '../api/order-keys';
 import type { AllergySummary } from '../api/types';
-import { ActionDialog, ReasonField } from './action-dialog';
+import { ActionDialog } from '../../../components/ui/action-dialog';
+import { ReasonField } from './reason-field';
 
 /**
  * The chef's reason for confirming despite the kitchen's checks: 5 to 480 characters, as the API

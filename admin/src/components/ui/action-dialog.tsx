@@ -1,18 +1,10 @@
-import {
-  Alert,
-  Button,
-  CloseButton,
-  Dialog,
-  Field,
-  Portal,
-  Stack,
-  Textarea,
-} from '@chakra-ui/react';
+import { Alert, Button, CloseButton, Dialog, Portal, Stack } from '@chakra-ui/react';
 import type { ReactNode } from 'react';
 
 /**
- * The frame of every order action: what will happen is said first, then the button. The
- * dialog stays open when the server refuses, with its reason in words, so nothing typed is lost.
+ * The frame of every dialog that asks before acting (order actions, deletions, team changes):
+ * what will happen is said first, then the button. The dialog stays open when the server
+ * refuses, with its reason in words, so nothing typed is lost.
  */
 export function ActionDialog({
   open,
@@ -103,42 +95,5 @@ export function ActionDialog({
         </Dialog.Positioner>
       </Portal>
     </Dialog.Root>
-  );
-}
-
-/** A reason for the order's history, with its limit and its error. */
-export function ReasonField({
-  label,
-  helper,
-  value,
-  onChange,
-  error,
-  required,
-  max,
-}: {
-  label: string;
-  helper?: ReactNode;
-  value: string;
-  onChange: (value: string) => void;
-  error?: string | null;
-  required?: boolean;
-  max: number;
-}) {
-  return (
-    <Field.Root invalid={!!error} required={required}>
-      <Field.Label>
-        {label}
-        {required && <Field.RequiredIndicator />}
-      </Field.Label>
-      <Textarea
-        rows={3}
-        value={value}
-        maxLength={max}
-        onChange={(e) => onChange(e.target.value)}
-        bg="bg.subtle"
-      />
-      {helper && !error && <Field.HelperText>{helper}</Field.HelperText>}
-      <Field.ErrorText>{error}</Field.ErrorText>
-    </Field.Root>
   );
 }
